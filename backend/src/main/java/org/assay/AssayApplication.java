@@ -1,0 +1,24 @@
+package org.assay;
+
+import org.springframework.boot.SpringApplication;
+import org.springframework.boot.autoconfigure.SpringBootApplication;
+import org.springframework.boot.context.properties.ConfigurationPropertiesScan;
+import org.springframework.scheduling.annotation.EnableScheduling;
+
+/**
+ * The Assay server: a team validation queue for machine-drafted map features.
+ *
+ * <p>
+ * Each top-level package under this one is an application module (see DEVELOPERS.md for
+ * the modules and the direction of their dependencies).
+ */
+@SpringBootApplication
+@ConfigurationPropertiesScan
+@EnableScheduling
+public class AssayApplication {
+
+	public static void main(String[] args) {
+		SpringApplication.run(AssayApplication.class, args);
+	}
+
+}

@@ -1,0 +1,21 @@
+package org.assay.accounts;
+
+/**
+ * A person known to Assay, as other modules see them.
+ *
+ * @param id the account id
+ * @param username the sign-in name
+ * @param displayName the name shown to others
+ * @param role the role
+ */
+public record Account(long id, String username, String displayName, Role role) {
+
+	/**
+	 * Whether this account is an administrator.
+	 * @return true for ADMIN
+	 */
+	public boolean isAdmin() {
+		return this.role == Role.ADMIN;
+	}
+
+}
