@@ -1,8 +1,11 @@
 package org.assay;
 
+import java.time.Clock;
+
 import org.springframework.boot.SpringApplication;
 import org.springframework.boot.autoconfigure.SpringBootApplication;
 import org.springframework.boot.context.properties.ConfigurationPropertiesScan;
+import org.springframework.context.annotation.Bean;
 import org.springframework.scheduling.annotation.EnableScheduling;
 
 /**
@@ -16,6 +19,15 @@ import org.springframework.scheduling.annotation.EnableScheduling;
 @ConfigurationPropertiesScan
 @EnableScheduling
 public class AssayApplication {
+
+	/**
+	 * The clock all modules read the time from, so tests can move it.
+	 * @return the system clock in UTC
+	 */
+	@Bean
+	Clock clock() {
+		return Clock.systemUTC();
+	}
 
 	public static void main(String[] args) {
 		SpringApplication.run(AssayApplication.class, args);

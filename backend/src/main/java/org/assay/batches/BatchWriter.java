@@ -1,0 +1,192 @@
+package org.assay.batches;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.sql.PreparedStatement;
+import java.sql.SQLException;
+import java.sql.Types;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.List;
+import java.util.function.IntConsumer;
+
+import org.assay.cells.CellBox;
+import org.assay.cells.CellPlan;
+import org.locationtech.jts.geom.Envelope;
+
+import org.springframework.jdbc.core.BatchPreparedStatementSetter;
+import org.springframework.jdbc.core.JdbcTemplate;
+import org.springframework.jdbc.support.GeneratedKeyHolder;
+import org.springframework.jdbc.support.KeyHolder;
+
+/**
+ * Pass 2 of an upload: writes the batch, its cells, its drafts and its reference layer
+ * with JDBC batches. Runs inside the caller's transaction, so that on any failure nothing
+ * of the batch is stored.
+ */
+final class BatchWriter {
+
+	private static final int BATCH_SIZE = 1000;
+
+	private static final String INSERT_DRAFT = "insert into draft (batch_id, cell_id, seq, source_id, kind, confidence,"
+			+ " feature_class, geom, min_x, min_y, max_x, max_y, length_m, properties)"
+			+ " values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)";
+
+	private static final String INSERT_REFERENCE = "insert into reference_feature (batch_id, seq, source_id, kind, geom,"
+			+ " min_x, min_y, max_x, max_y, properties) values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)";
+
+	private final JdbcTemplate jdbc;
+
+	BatchWriter(JdbcTemplate jdbc) {
+		this.jdbc = jdbc;
+	}
+
+	long insertBatch(UploadSettings settings, long createdBy, int draftCount, int cellCount, int referenceCount,
+			Envelope extent) {
+		KeyHolder keys = new GeneratedKeyHolder();
+		this.jdbc.update((connection) -> {
+			PreparedStatement ps = connection.prepareStatement("insert into batch (name, model_name, model_version,"
+					+ " imagery_url, reason_catalogue, state, created_by, created_at, max_drafts_per_cell,"
+					+ " max_road_km_per_cell, lease_minutes, draft_count, cell_count, reference_count,"
+					+ " min_x, min_y, max_x, max_y) values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)",
+					new String[] { "id" });
+			ps.setString(1, settings.name());
+			ps.setString(2, settings.modelName());
+			ps.setString(3, settings.modelVersion());
+			ps.setString(4, settings.imageryUrl());
+			ps.setString(5, settings.reasonCatalogue());
+			ps.setString(6, BatchState.OPEN.name());
+			ps.setLong(7, createdBy);
+			ps.setObject(8, OffsetDateTime.now(ZoneOffset.UTC));
+			ps.setInt(9, settings.maxDraftsPerCell());
+			ps.setDouble(10, settings.maxRoadKmPerCell());
+			ps.setInt(11, settings.leaseMinutes());
+			ps.setInt(12, draftCount);
+			ps.setInt(13, cellCount);
+			ps.setInt(14, referenceCount);
+			ps.setDouble(15, extent.getMinX());
+			ps.setDouble(16, extent.getMinY());
+			ps.setDouble(17, extent.getMaxX());
+			ps.setDouble(18, extent.getMaxY());
+			return ps;
+		}, keys);
+		return keys.getKeyAs(Number.class).longValue();
+	}
+
+	/**
+	 * Inserts the cells of a plan.
+	 * @return the cell ids, by index in the plan
+	 */
+	long[] insertCells(long batchId, CellPlan plan) {
+		List<CellBox> cells = plan.cells();
+		this.jdbc.batchUpdate("insert into cell (batch_id, seq, min_x, min_y, max_x, max_y, draft_count,"
+				+ " road_length_m, over_limit, decided_count, version) values (?, ?, ?, ?, ?, ?, ?, ?, ?, 0, 0)",
+				new BatchPreparedStatementSetter() {
+
+					@Override
+					public void setValues(PreparedStatement ps, int i) throws SQLException {
+						CellBox cell = cells.get(i);
+						ps.setLong(1, batchId);
+						ps.setInt(2, i);
+						ps.setDouble(3, cell.minX());
+						ps.setDouble(4, cell.minY());
+						ps.setDouble(5, cell.maxX());
+						ps.setDouble(6, cell.maxY());
+						ps.setInt(7, cell.draftCount());
+						ps.setDouble(8, cell.roadMetres());
+						ps.setBoolean(9, cell.overLimit());
+					}
+
+					@Override
+					public int getBatchSize() {
+						return cells.size();
+					}
+
+				});
+		long[] ids = new long[cells.size()];
+		this.jdbc.query("select id, seq from cell where batch_id = ?", (rs) -> {
+			ids[rs.getInt(2)] = rs.getLong(1);
+		}, batchId);
+		return ids;
+	}
+
+	void insertDrafts(long batchId, Path spool, int[] cellOfDraft, long[] cellIds, IntConsumer progress) {
+		this.jdbc.execute((java.sql.Connection connection) -> {
+			try (PreparedStatement ps = connection.prepareStatement(INSERT_DRAFT);
+					FeatureSpool.Reader reader = FeatureSpool.reader(spool)) {
+				int index = 0;
+				for (FeatureSpool.Row row = reader.next(); row != null; row = reader.next()) {
+					ps.setLong(1, batchId);
+					ps.setLong(2, cellIds[cellOfDraft[index]]);
+					ps.setInt(3, row.seq());
+					ps.setString(4, row.sourceId());
+					ps.setString(5, row.kind().jsonName());
+					ps.setDouble(6, row.confidence());
+					ps.setString(7, row.featureClass());
+					ps.setBytes(8, row.wkb());
+					setBox(ps, 9, row);
+					ps.setDouble(13, row.lengthMetres());
+					ps.setString(14, row.properties());
+					ps.addBatch();
+					index++;
+					if (index % BATCH_SIZE == 0) {
+						ps.executeBatch();
+						progress.accept(index);
+					}
+				}
+				ps.executeBatch();
+				progress.accept(index);
+				return null;
+			}
+			catch (IOException ex) {
+				throw new UncheckedIOException(ex);
+			}
+		});
+	}
+
+	int insertReference(long batchId, Path spool) {
+		return this.jdbc.execute((java.sql.Connection connection) -> {
+			try (PreparedStatement ps = connection.prepareStatement(INSERT_REFERENCE);
+					FeatureSpool.Reader reader = FeatureSpool.reader(spool)) {
+				int count = 0;
+				for (FeatureSpool.Row row = reader.next(); row != null; row = reader.next()) {
+					ps.setLong(1, batchId);
+					ps.setInt(2, row.seq());
+					ps.setString(3, row.sourceId());
+					ps.setString(4, row.kind().jsonName());
+					ps.setBytes(5, row.wkb());
+					setBox(ps, 6, row);
+					if (row.properties() != null) {
+						ps.setString(10, row.properties());
+					}
+					else {
+						ps.setNull(10, Types.VARCHAR);
+					}
+					ps.addBatch();
+					count++;
+					if (count % BATCH_SIZE == 0) {
+						ps.executeBatch();
+					}
+				}
+				ps.executeBatch();
+				return count;
+			}
+			catch (IOException ex) {
+				throw new UncheckedIOException(ex);
+			}
+		});
+	}
+
+	void setReferenceCount(long batchId, int count) {
+		this.jdbc.update("update batch set reference_count = ? where id = ?", count, batchId);
+	}
+
+	private static void setBox(PreparedStatement ps, int first, FeatureSpool.Row row) throws SQLException {
+		ps.setDouble(first, row.minX());
+		ps.setDouble(first + 1, row.minY());
+		ps.setDouble(first + 2, row.maxX());
+		ps.setDouble(first + 3, row.maxY());
+	}
+
+}
