@@ -12,6 +12,8 @@ public class FeatureProblem extends RuntimeException {
 
 	private final FeatureFault fault;
 
+	private final String detail;
+
 	/**
 	 * Creates a problem.
 	 * @param index zero-based feature index, or -1 for the document
@@ -24,6 +26,7 @@ public class FeatureProblem extends RuntimeException {
 		this.index = index;
 		this.featureId = featureId;
 		this.fault = fault;
+		this.detail = detail;
 	}
 
 	private static String describe(int index, String featureId, String detail) {
@@ -33,14 +36,26 @@ public class FeatureProblem extends RuntimeException {
 		return "Feature " + index + ((featureId != null) ? " (id " + featureId + ")" : "") + ": " + detail;
 	}
 
+	/**
+	 * The zero-based index of the feature in the collection.
+	 * @return the index, or -1 for a fault of the whole document
+	 */
 	public int index() {
 		return this.index;
 	}
 
+	/**
+	 * The id of the feature, when it has one and it was read before the fault.
+	 * @return the id as text, or {@code null}
+	 */
 	public String featureId() {
 		return this.featureId;
 	}
 
+	/**
+	 * What is wrong.
+	 * @return the fault
+	 */
 	public FeatureFault fault() {
 		return this.fault;
 	}
@@ -50,7 +65,7 @@ public class FeatureProblem extends RuntimeException {
 	 * @return the message
 	 */
 	public String detail() {
-		return getMessage();
+		return this.detail;
 	}
 
 }

@@ -1,0 +1,210 @@
+package org.assay.geo;
+
+import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
+import java.util.Arrays;
+
+import tools.jackson.core.JsonGenerator;
+import tools.jackson.core.JsonParser;
+import tools.jackson.core.JsonToken;
+import tools.jackson.core.ObjectWriteContext;
+import tools.jackson.core.TokenStreamFactory;
+
+/**
+ * Copies a feature's {@code properties} object to compact JSON text while picking out
+ * {@code kind}, {@code confidence} and {@code class}. Numbers are copied as written, so
+ * {@code 0.90} stays {@code 0.90}; only whitespace goes and string escapes are
+ * normalised. The copy stops as soon as it passes the size limit, so a huge properties
+ * object is skipped rather than held.
+ */
+final class PropertiesReader {
+
+	private final JsonParser parser;
+
+	private final TokenStreamFactory factory;
+
+	private final Sink sink;
+
+	PropertiesReader(JsonParser parser, TokenStreamFactory factory, int maxBytes) {
+		this.parser = parser;
+		this.factory = factory;
+		this.sink = new Sink(maxBytes);
+	}
+
+	/**
+	 * Reads the value whose first token is current.
+	 */
+	void read(JsonToken first, FeatureDraft draft) {
+		if (first == JsonToken.VALUE_NULL) {
+			return;
+		}
+		if (first != JsonToken.START_OBJECT) {
+			draft.fail(FeatureFault.NOT_GEOJSON, "its properties are " + Tokens.describe(first) + ", not an object");
+			this.parser.skipChildren();
+			return;
+		}
+		int outer = this.parser.streamReadContext().getNestingDepth();
+		this.sink.reset();
+		boolean copied;
+		try (JsonGenerator out = this.factory.createGenerator(ObjectWriteContext.empty(), this.sink)) {
+			copied = copy(out, draft);
+			out.flush();
+		}
+		skipRest(outer);
+		if (!copied) {
+			return;
+		}
+		if (this.sink.overflowed()) {
+			draft.fail(FeatureFault.PROPERTIES_TOO_LARGE,
+					"its properties are larger than " + this.sink.limit + " bytes, the limit per feature");
+			return;
+		}
+		draft.propertiesJson = this.sink.text();
+	}
+
+	/**
+	 * Copies token by token, so the size limit is checked as the copy grows.
+	 * @return false when the properties hold something that cannot be kept
+	 */
+	private boolean copy(JsonGenerator out, FeatureDraft draft) {
+		String member = null;
+		int depth = 0;
+		JsonToken token = JsonToken.START_OBJECT;
+		do {
+			if (depth == 1 && token != JsonToken.PROPERTY_NAME && token != JsonToken.END_OBJECT) {
+				pick(member, token, draft);
+			}
+			switch (token) {
+				case START_OBJECT -> {
+					out.writeStartObject();
+					depth++;
+				}
+				case END_OBJECT -> {
+					out.writeEndObject();
+					depth--;
+				}
+				case START_ARRAY -> {
+					out.writeStartArray();
+					depth++;
+				}
+				case END_ARRAY -> {
+					out.writeEndArray();
+					depth--;
+				}
+				case PROPERTY_NAME -> {
+					member = this.parser.currentName();
+					out.writeName(member);
+				}
+				case VALUE_STRING -> out.writeString(this.parser.getStringCharacters(), this.parser.getStringOffset(),
+						this.parser.getStringLength());
+				case VALUE_NUMBER_INT, VALUE_NUMBER_FLOAT -> {
+					if (this.parser.isNaN()) {
+						notJson(draft, member, depth);
+						return false;
+					}
+					out.writeNumber(this.parser.getString());
+				}
+				case VALUE_TRUE, VALUE_FALSE -> out.writeBoolean(token == JsonToken.VALUE_TRUE);
+				default -> out.writeNull();
+			}
+			if (this.sink.overflowed()) {
+				// the caller reports the overflow and skips the rest
+				return true;
+			}
+			token = (depth > 0) ? this.parser.nextToken() : null;
+		}
+		while (depth > 0);
+		return true;
+	}
+
+	/**
+	 * NaN and Infinity are let through the parser for coordinates, but they cannot be
+	 * kept in properties that must stay JSON.
+	 */
+	private void notJson(FeatureDraft draft, String member, int depth) {
+		String literal = this.parser.getString();
+		if (depth == 1 && "confidence".equals(member)) {
+			draft.fail(FeatureFault.BAD_CONFIDENCE, "its confidence " + literal + " is not a finite number");
+		}
+		else {
+			draft.fail(FeatureFault.NOT_GEOJSON,
+					"its property " + member + " holds " + literal + ", which JSON does not allow");
+		}
+	}
+
+	private void pick(String member, JsonToken token, FeatureDraft draft) {
+		switch (member) {
+			case "kind" -> {
+				draft.kindToken = token;
+				draft.kindText = (token == JsonToken.VALUE_STRING) ? this.parser.getString() : null;
+			}
+			case "confidence" -> {
+				draft.confidenceToken = token;
+				draft.confidenceText = token.isScalarValue() ? this.parser.getString() : null;
+				draft.confidence = Tokens.isNumber(token) ? this.parser.getDoubleValue() : Double.NaN;
+			}
+			// A class that is not a string stays in the properties text only
+			case "class" -> draft.featureClass = (token == JsonToken.VALUE_STRING) ? this.parser.getString() : null;
+			default -> {
+			}
+		}
+	}
+
+	/**
+	 * Leaves the parser on the closing brace of the properties object, whose nesting
+	 * depth is {@code outer}, when the copy stopped early.
+	 */
+	private void skipRest(int outer) {
+		while (this.parser.streamReadContext().getNestingDepth() >= outer) {
+			if (this.parser.nextToken() == null) {
+				return;
+			}
+		}
+	}
+
+	/** A byte buffer that keeps at most the limit and remembers whether more came. */
+	private static final class Sink extends OutputStream {
+
+		private final int limit;
+
+		private byte[] bytes = new byte[1024];
+
+		private long count;
+
+		Sink(int limit) {
+			this.limit = limit;
+		}
+
+		void reset() {
+			this.count = 0;
+		}
+
+		boolean overflowed() {
+			return this.count > this.limit;
+		}
+
+		String text() {
+			return new String(this.bytes, 0, (int) this.count, StandardCharsets.UTF_8);
+		}
+
+		@Override
+		public void write(int b) {
+			write(new byte[] { (byte) b }, 0, 1);
+		}
+
+		@Override
+		public void write(byte[] source, int offset, int length) {
+			long end = this.count + length;
+			if (end <= this.limit) {
+				if (end > this.bytes.length) {
+					this.bytes = Arrays.copyOf(this.bytes,
+							(int) Math.min(this.limit, Math.max(end, this.bytes.length * 2L)));
+				}
+				System.arraycopy(source, offset, this.bytes, (int) this.count, length);
+			}
+			this.count = end;
+		}
+
+	}
+
+}
