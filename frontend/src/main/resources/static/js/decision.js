@@ -1,0 +1,119 @@
+// The verdict being made on the current draft: the chosen verdict and reason, the shape being
+// amended, and recording it. A verdict that got no answer keeps its UUID, so sending it again
+// cannot count it twice.
+
+import { NetworkError, putVerdict, uuid } from './api.js';
+import { byId } from './dom.js';
+import { canAmend, startAmend } from './amend.js';
+import { shownGeometry } from './layers.js';
+import * as panel from './panel.js';
+import { STATES } from './styles.js';
+
+const CHOOSE_FIRST = 'Choose a verdict first: a, m, r or e.';
+
+export class Decision {
+  /** `context`: {review, map, layers, username, reveal(feature, force), recorded(draft, said)}. */
+  constructor(context) {
+    this.c = context;
+    this.choice = null; // {verdict, reasonCode}
+    this.editor = null; // the vertex handles while amending
+    this.pending = null; // {key, id} of a verdict sent without a confirmed answer
+    this.busy = false;
+    this.pickReason = this.pickReason.bind(this);
+  }
+
+  /** Forgets the choice and any unsaved shape change, and clears the comment. */
+  drop() {
+    const { review, layers } = this.c;
+    if (this.editor) {
+      this.editor.stop();
+      this.editor = null;
+      if (review.current) layers.setCurrentGeometry(shownGeometry(review.current));
+    }
+    this.choice = null;
+    byId('comment').value = '';
+    panel.showChoice(review, null, this.pickReason);
+  }
+
+  /** Chooses a verdict; `quick` (the keyboard) records Accept at once when it has a default reason. */
+  choose(verdict, quick = false) {
+    const draft = this.c.review.current;
+    if (!draft || this.busy) return;
+    if (this.choice?.verdict !== verdict) this.begin(draft, verdict);
+    panel.showChoice(this.c.review, this.choice, this.pickReason);
+    if (quick && verdict === 'ACCEPT' && this.choice.reasonCode) {
+      this.record();
+      return;
+    }
+    panel.focusReasons();
+    panel.status(this.choice.reasonCode ? '' : 'Pick a reason: press its number, or click it.');
+  }
+
+  begin(draft, verdict) {
+    const { review, map, layers, reveal } = this.c;
+    const comment = byId('comment').value;
+    this.drop();
+    byId('comment').value = comment;
+    this.choice = { verdict, reasonCode: review.defaultReason(verdict)?.code || null };
+    const geometry = shownGeometry(draft);
+    if (verdict === 'AMEND' && canAmend(geometry)) {
+      reveal(draft, true); // handles need room: show the draft large
+      this.editor = startAmend(map, geometry, (edited) => layers.setCurrentGeometry(edited));
+    }
+  }
+
+  pickReason(code) {
+    if (!this.choice) return;
+    this.choice.reasonCode = code;
+    panel.showChoice(this.c.review, this.choice, this.pickReason);
+    panel.status('');
+  }
+
+  pickNumber(number) {
+    if (!this.choice) return panel.status(CHOOSE_FIRST, 'error');
+    const reason = this.c.review.reasonByNumber(this.choice.verdict, number);
+    if (!reason) return panel.status(`${STATES[this.choice.verdict].verb} has no reason ${number}.`, 'error');
+    this.pickReason(reason.code);
+  }
+
+  body(draft) {
+    const { verdict, reasonCode } = this.choice;
+    const amended = this.editor ? this.editor.geometry() : shownGeometry(draft);
+    return {
+      draftId: draft.id, verdict, reasonCode,
+      comment: byId('comment').value.trim() || null,
+      geometry: verdict === 'AMEND' ? amended : null,
+    };
+  }
+
+  async record() {
+    const { review, layers, username, recorded } = this.c;
+    const draft = review.current;
+    if (this.busy || !draft) return;
+    if (!this.choice) return panel.status(CHOOSE_FIRST, 'error');
+    if (!this.choice.reasonCode) return panel.status('Pick a reason first: press its number.', 'error');
+    const body = this.body(draft);
+    const key = JSON.stringify(body);
+    if (!this.pending || this.pending.key !== key) this.pending = { key, id: uuid() };
+    this.busy = true;
+    byId('record').disabled = true;
+    panel.status('Recording…');
+    try {
+      const answer = await putVerdict(this.pending.id, body);
+      this.pending = null;
+      review.recorded(draft, body, answer, username);
+      if (this.editor) this.editor.stop();
+      this.editor = null;
+      layers.update(draft);
+      recorded(draft, `Recorded: ${STATES[body.verdict].verb}, ${review.reasonLabel(body.verdict, body.reasonCode)}.`);
+    } catch (e) {
+      const retry = e instanceof NetworkError
+        ? ' The verdict may not be saved: press Enter to send it again (it will not count twice).'
+        : '';
+      panel.status(e.message + retry, 'error');
+      byId('record').disabled = false;
+    } finally {
+      this.busy = false;
+    }
+  }
+}

@@ -1,0 +1,93 @@
+// The start page: my cells to resume, the batches with their progress, and taking the next cell.
+
+import { get, post } from './api.js';
+import { byId, el, fillBar, say, timeOfDay } from './dom.js';
+import { isLead, showSignedIn } from './session.js';
+
+const number = new Intl.NumberFormat();
+const STATE_NAMES = { PREVIEW: 'Preview', OPEN: 'Open', CLOSED: 'Closed' };
+
+function bar(part, whole) {
+  const node = el('span', { className: 'bar', 'aria-hidden': 'true' }, el('span', { className: 'bar-fill' }));
+  fillBar(node, part, whole);
+  return node;
+}
+
+function progress(part, whole) {
+  return el('div', { className: 'progress' }, bar(part, whole),
+    el('span', { className: 'progress-text' }, `${number.format(part)} / ${number.format(whole)}`));
+}
+
+/** Claims the batch's next cell and opens it; 204 means none is left. */
+async function takeNextCell(batch, button, status) {
+  button.disabled = true;
+  say(status, '');
+  try {
+    const cell = await post(`api/batches/${batch.id}/claims/next`);
+    if (cell) {
+      location.assign(`work.html?cell=${encodeURIComponent(cell.id)}`);
+      return;
+    }
+    say(status, 'No open cell is left in this batch.', 'info');
+  } catch (e) {
+    say(status, e.message, 'error');
+  }
+  button.disabled = false;
+}
+
+function batchRow(batch, me) {
+  const status = el('p', { className: 'status status-inline', role: 'status', hidden: true });
+  const take = el('button', { type: 'button', className: 'button button-primary' }, 'Take next cell');
+  take.setAttribute('aria-describedby', `batch-${batch.id}-name`);
+  take.addEventListener('click', () => takeNextCell(batch, take, status));
+  const actions = el('div', { className: 'actions' }, take);
+  if (isLead(me)) {
+    actions.append(el('a', {
+      className: 'button button-quiet',
+      href: `api/batches/${encodeURIComponent(batch.id)}/export.geojson`,
+      download: '',
+    }, 'Export GeoJSON'));
+  }
+  actions.append(status);
+  const model = [batch.modelName, batch.modelVersion].filter(Boolean).join(' ');
+  return el('tr', {},
+    el('th', { scope: 'row' },
+      el('span', { className: 'batch-name', id: `batch-${batch.id}-name` }, batch.name),
+      el('span', { className: 'muted small' }, model ? `Model ${model}` : ''),
+      batch.imageryUrl ? null : el('span', { className: 'muted small' }, 'No imagery')),
+    el('td', {}, el('span', { className: 'tag', dataset: { state: batch.state } }, STATE_NAMES[batch.state] || batch.state)),
+    el('td', {}, progress(batch.decidedCount, batch.draftCount)),
+    el('td', {}, progress(batch.finishedCells, batch.cellCount)),
+    el('td', {}, actions));
+}
+
+function cellItem(cell, batchesById, me) {
+  const batch = batchesById.get(cell.batchId);
+  const mine = cell.holder === me.username;
+  const note = mine && cell.leaseExpiresAt ? `held until ${timeOfDay(cell.leaseExpiresAt)}` : 'assigned to you';
+  return el('li', { className: 'cell-item' },
+    el('div', {},
+      el('span', { className: 'cell-title' }, `Cell ${cell.seq}`),
+      el('span', { className: 'muted' }, ` · ${batch ? batch.name : 'Batch ' + cell.batchId} · ${note}`)),
+    progress(cell.decidedCount, cell.draftCount),
+    el('a', { className: 'button', href: `work.html?cell=${encodeURIComponent(cell.id)}` },
+      cell.finished ? 'Open' : 'Resume', el('span', { className: 'visually-hidden' }, ` cell ${cell.seq}`)));
+}
+
+async function start() {
+  const status = byId('home-status');
+  try {
+    const me = await showSignedIn();
+    const [batches, cells] = await Promise.all([get('api/batches'), get('api/my/cells')]);
+    const batchesById = new Map(batches.map((b) => [b.id, b]));
+    byId('my-cells').replaceChildren(...cells.map((c) => cellItem(c, batchesById, me)));
+    byId('my-cells-empty').hidden = cells.length > 0;
+    byId('batches').tBodies[0].replaceChildren(...batches.map((b) => batchRow(b, me)));
+    byId('batches').hidden = batches.length === 0;
+    byId('batches-empty').hidden = batches.length > 0;
+  } catch (e) {
+    say(status, e.message, 'error');
+  }
+}
+
+start();

@@ -1,0 +1,109 @@
+// The review panel beside the map: the cell's progress, the current draft's facts, and the
+// verdict being chosen. It only writes the DOM; work.js decides what happens.
+
+import { byId, el, fillBar, say, timeOfDay } from './dom.js';
+import { kindName } from './layers.js';
+import { sample } from './legend.js';
+import { draftCasing, draftLine, STATES, VERDICTS } from './styles.js';
+
+const NONE = '—';
+
+/** Builds the four verdict buttons; `onChoose(verdict)` runs on a click. */
+export function buildVerdictButtons(onChoose) {
+  byId('verdict-buttons').replaceChildren(...VERDICTS.map((verdict) => {
+    const s = STATES[verdict];
+    const button = el('button', { type: 'button', className: 'verdict-button', 'aria-pressed': 'false', dataset: { verdict } },
+      sample(draftCasing(), draftLine(verdict, 'road')), el('span', {}, s.verb), el('kbd', { 'aria-hidden': 'true' }, s.key));
+    button.setAttribute('aria-keyshortcuts', s.key);
+    button.addEventListener('click', () => onChoose(verdict));
+    return button;
+  }));
+}
+
+export function showCell(review, batch) {
+  const cell = review.cell;
+  byId('cell-title').textContent = `Cell ${cell.seq}`;
+  document.title = `Cell ${cell.seq} · ${batch ? batch.name : 'Assay'}`;
+  byId('cell-batch').textContent = batch ? [batch.name, batch.modelName, batch.modelVersion].filter(Boolean).join(' · ') : '';
+  byId('cell-progress').textContent = `${review.decided} / ${review.count} decided`;
+  fillBar(byId('cell-bar'), review.decided, review.count);
+  byId('finished').hidden = !cell.finished;
+}
+
+/** Says who holds the cell when that is worth knowing. */
+export function showHolder(cell, me) {
+  let note = '';
+  if (cell.holder && cell.holder !== me.username) note = `This cell is held by ${cell.holder}; your verdicts may be refused.`;
+  else if (cell.holder === me.username && cell.leaseExpiresAt) note = `Held by you until ${timeOfDay(cell.leaseExpiresAt)}.`;
+  else if (!cell.holder && !cell.finished) note = 'Nobody holds this cell at the moment.';
+  say(byId('cell-note'), note);
+}
+
+function confidence(value) {
+  if (typeof value !== 'number') return NONE;
+  return value <= 1 ? `${Math.round(value * 100)} %` : String(value);
+}
+
+export function showDraft(review) {
+  const draft = review.current;
+  if (!draft) {
+    byId('draft-title').textContent = 'No drafts in this cell';
+    return;
+  }
+  const p = draft.properties;
+  byId('draft-title').textContent = `Draft ${review.index + 1} of ${review.count}`;
+  byId('draft-kind').textContent = kindName(p.kind);
+  byId('draft-confidence').textContent = confidence(p.confidence);
+  byId('draft-class').textContent = p.class || NONE;
+  byId('draft-source').textContent = p.sourceId ?? NONE;
+  const decided = byId('draft-decided');
+  const v = p.verdict;
+  decided.hidden = !v;
+  if (v) {
+    decided.dataset.verdict = v.verdict;
+    const by = [v.validator ? `by ${v.validator}` : '', v.decidedAt ? `at ${timeOfDay(v.decidedAt)}` : ''].join(' ').trim();
+    decided.replaceChildren(`${STATES[v.verdict]?.label || v.verdict}: ${review.reasonLabel(v.verdict, v.reasonCode)}`,
+      v.comment ? ` “${v.comment}”` : '', by ? el('span', { className: 'decided-by' }, by) : '');
+  }
+}
+
+function reasonItem(reason, onPick) {
+  const id = `reason-${reason.verdict}-${reason.code}`.replace(/[^\w-]/g, '_');
+  const input = el('input', { type: 'radio', name: 'reason', id, value: reason.code });
+  input.addEventListener('change', () => onPick(reason.code));
+  return el('div', { className: 'reason' }, input,
+    el('label', { for: id },
+      reason.number ? el('kbd', {}, String(reason.number)) : null,
+      el('span', { className: 'reason-label' }, reason.label),
+      reason.description ? el('span', { className: 'reason-text' }, reason.description) : null));
+}
+
+/** Shows the chosen verdict and reason (`choice` may be null). */
+export function showChoice(review, choice, onPick) {
+  for (const button of byId('verdict-buttons').children) {
+    button.setAttribute('aria-pressed', String(choice?.verdict === button.dataset.verdict));
+  }
+  const list = byId('reason-list');
+  const verdict = choice?.verdict || '';
+  if (list.dataset.verdict !== verdict) {
+    // Rebuilt only when the verdict changes, so a focused reason keeps its focus.
+    list.dataset.verdict = verdict;
+    list.replaceChildren(...(choice ? review.reasonsFor(verdict) : []).map((r) => reasonItem(r, onPick)));
+  }
+  const inside = list.contains(document.activeElement);
+  for (const input of list.querySelectorAll('input')) {
+    input.checked = input.value === choice?.reasonCode;
+    if (input.checked && inside) input.focus(); // a radio group keeps focus on its checked radio
+  }
+  byId('reasons').hidden = !choice;
+  byId('amend-hint').hidden = choice?.verdict !== 'AMEND';
+  byId('record').disabled = !(choice && choice.reasonCode);
+}
+
+/** Puts focus where Enter records: the chosen reason, else the first one. */
+export function focusReasons() {
+  const radio = byId('reason-list').querySelector('input:checked') || byId('reason-list').querySelector('input');
+  (radio || byId('record')).focus();
+}
+
+export const status = (text, kind) => say(byId('review-status'), text, kind);
