@@ -46,6 +46,17 @@ class BearerTokenFilter extends OncePerRequestFilter {
 		chain.doFilter(request, response);
 	}
 
+	@Override
+	protected boolean shouldNotFilterAsyncDispatch() {
+		// streamed responses are written in an async dispatch that is authorized again
+		return false;
+	}
+
+	@Override
+	protected boolean shouldNotFilterErrorDispatch() {
+		return false;
+	}
+
 	static String bearerToken(HttpServletRequest request) {
 		String header = request.getHeader("Authorization");
 		if (header != null && header.regionMatches(true, 0, "Bearer ", 0, 7)) {

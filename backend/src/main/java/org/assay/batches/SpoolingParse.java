@@ -76,7 +76,7 @@ final class SpoolingParse {
 			}
 		}
 		progress.accept(count);
-		return new Result(count, x, y, road, extent);
+		return new Result(count, Arrays.copyOf(x, count), Arrays.copyOf(y, count), Arrays.copyOf(road, count), extent);
 	}
 
 }
