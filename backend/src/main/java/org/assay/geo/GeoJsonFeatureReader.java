@@ -53,6 +53,8 @@ public final class GeoJsonFeatureReader implements Closeable {
 
 	private final CollectionReader collection;
 
+	private final PropertiesReader properties;
+
 	private final FeatureObjectReader featureReader;
 
 	private final FeatureAssembler assembler;
@@ -73,8 +75,8 @@ public final class GeoJsonFeatureReader implements Closeable {
 		this.parser = parser;
 		this.collection = new CollectionReader(parser);
 		CoordinateReader coordinates = new CoordinateReader(parser, options.maxCoordinatesPerFeature());
-		PropertiesReader properties = new PropertiesReader(parser, JSON, options.maxPropertiesBytes());
-		this.featureReader = new FeatureObjectReader(parser, coordinates, properties);
+		this.properties = new PropertiesReader(parser, options.maxPropertiesBytes());
+		this.featureReader = new FeatureObjectReader(parser, coordinates, this.properties);
 		this.assembler = new FeatureAssembler(options.requireConfidence());
 	}
 
@@ -183,6 +185,7 @@ public final class GeoJsonFeatureReader implements Closeable {
 
 	@Override
 	public void close() throws IOException {
+		this.properties.close();
 		this.parser.close();
 	}
 

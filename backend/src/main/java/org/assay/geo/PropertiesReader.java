@@ -8,7 +8,7 @@ import tools.jackson.core.JsonGenerator;
 import tools.jackson.core.JsonParser;
 import tools.jackson.core.JsonToken;
 import tools.jackson.core.ObjectWriteContext;
-import tools.jackson.core.TokenStreamFactory;
+import tools.jackson.core.json.JsonFactory;
 
 /**
  * Copies a feature's {@code properties} object to compact JSON text while picking out
@@ -19,16 +19,30 @@ import tools.jackson.core.TokenStreamFactory;
  */
 final class PropertiesReader {
 
-	private final JsonParser parser;
+	// One generator writes the properties of every feature, one root value after
+	// another with nothing between, which saves making one per feature
+	private static final JsonFactory WRITER = JsonFactory.builder().rootValueSeparator((String) null).build();
 
-	private final TokenStreamFactory factory;
+	private final JsonParser parser;
 
 	private final Sink sink;
 
-	PropertiesReader(JsonParser parser, TokenStreamFactory factory, int maxBytes) {
+	private JsonGenerator out;
+
+	PropertiesReader(JsonParser parser, int maxBytes) {
 		this.parser = parser;
-		this.factory = factory;
 		this.sink = new Sink(maxBytes);
+	}
+
+	void close() {
+		discardGenerator();
+	}
+
+	private void discardGenerator() {
+		if (this.out != null) {
+			this.out.close();
+			this.out = null;
+		}
 	}
 
 	/**
@@ -45,10 +59,17 @@ final class PropertiesReader {
 		}
 		int outer = this.parser.streamReadContext().getNestingDepth();
 		this.sink.reset();
-		boolean copied;
-		try (JsonGenerator out = this.factory.createGenerator(ObjectWriteContext.empty(), this.sink)) {
-			copied = copy(out, draft);
-			out.flush();
+		if (this.out == null) {
+			this.out = WRITER.createGenerator(ObjectWriteContext.empty(), this.sink);
+		}
+		boolean copied = copy(this.out, draft);
+		if (copied && this.out.streamWriteContext().inRoot()) {
+			this.out.flush();
+		}
+		else {
+			// the copy stopped inside the object: this generator cannot write the next
+			// one
+			discardGenerator();
 		}
 		skipRest(outer);
 		if (!copied) {
