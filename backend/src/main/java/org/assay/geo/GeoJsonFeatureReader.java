@@ -85,9 +85,16 @@ public final class GeoJsonFeatureReader implements Closeable {
 	 * @param in the GeoJSON bytes (UTF-8)
 	 * @param options limits and requirements
 	 * @return the reader
+	 * @throws UncheckedIOException when the stream cannot be read
 	 */
 	public static GeoJsonFeatureReader open(InputStream in, ReaderOptions options) {
-		return new GeoJsonFeatureReader(JSON.createParser(ObjectReadContext.empty(), in), options);
+		try {
+			// Jackson reads the first bytes here, to tell the encoding
+			return new GeoJsonFeatureReader(JSON.createParser(ObjectReadContext.empty(), in), options);
+		}
+		catch (JacksonIOException ex) {
+			throw new UncheckedIOException(ex.getCause());
+		}
 	}
 
 	/**

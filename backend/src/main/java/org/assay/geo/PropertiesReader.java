@@ -1,9 +1,5 @@
 package org.assay.geo;
 
-import java.io.OutputStream;
-import java.nio.charset.StandardCharsets;
-import java.util.Arrays;
-
 import tools.jackson.core.JsonGenerator;
 import tools.jackson.core.JsonParser;
 import tools.jackson.core.JsonToken;
@@ -25,13 +21,13 @@ final class PropertiesReader {
 
 	private final JsonParser parser;
 
-	private final Sink sink;
+	private final BoundedBytes sink;
 
 	private JsonGenerator out;
 
 	PropertiesReader(JsonParser parser, int maxBytes) {
 		this.parser = parser;
-		this.sink = new Sink(maxBytes);
+		this.sink = new BoundedBytes(maxBytes);
 	}
 
 	void close() {
@@ -77,7 +73,7 @@ final class PropertiesReader {
 		}
 		if (this.sink.overflowed()) {
 			draft.fail(FeatureFault.PROPERTIES_TOO_LARGE,
-					"its properties are larger than " + this.sink.limit + " bytes, the limit per feature");
+					"its properties are larger than " + this.sink.limit() + " bytes, the limit per feature");
 			return;
 		}
 		draft.propertiesJson = this.sink.text();
@@ -181,51 +177,6 @@ final class PropertiesReader {
 				return;
 			}
 		}
-	}
-
-	/** A byte buffer that keeps at most the limit and remembers whether more came. */
-	private static final class Sink extends OutputStream {
-
-		private final int limit;
-
-		private byte[] bytes = new byte[1024];
-
-		private long count;
-
-		Sink(int limit) {
-			this.limit = limit;
-		}
-
-		void reset() {
-			this.count = 0;
-		}
-
-		boolean overflowed() {
-			return this.count > this.limit;
-		}
-
-		String text() {
-			return new String(this.bytes, 0, (int) this.count, StandardCharsets.UTF_8);
-		}
-
-		@Override
-		public void write(int b) {
-			write(new byte[] { (byte) b }, 0, 1);
-		}
-
-		@Override
-		public void write(byte[] source, int offset, int length) {
-			long end = this.count + length;
-			if (end <= this.limit) {
-				if (end > this.bytes.length) {
-					this.bytes = Arrays.copyOf(this.bytes,
-							(int) Math.min(this.limit, Math.max(end, this.bytes.length * 2L)));
-				}
-				System.arraycopy(source, offset, this.bytes, (int) this.count, length);
-			}
-			this.count = end;
-		}
-
 	}
 
 }

@@ -1,6 +1,10 @@
 package org.assay.geo;
 
 import java.io.ByteArrayInputStream;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.SequenceInputStream;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
@@ -740,6 +744,37 @@ class GeoJsonFeatureReaderTests {
 		// RFC 7946 section 4: the ranges are inclusive
 		List<ParsedFeature> features = readAll(collection(road("edge", "[[-180, -90], [180, 90]]")));
 		assertThat(features).hasSize(1);
+	}
+
+	@Test
+	void closingTheReaderClosesTheStream() throws Exception {
+		boolean[] closed = { false };
+		InputStream in = new ByteArrayInputStream(collection(ROAD).getBytes(StandardCharsets.UTF_8)) {
+			@Override
+			public void close() {
+				closed[0] = true;
+			}
+		};
+		GeoJsonFeatureReader.open(in, ReaderOptions.drafts()).close();
+		assertThat(closed[0]).isTrue();
+	}
+
+	@Test
+	void streamThatFailsIsAnInputOutputErrorNotAFault() throws Exception {
+		// common practice: a broken connection is not the uploader's fault
+		InputStream failing = new SequenceInputStream(
+				new ByteArrayInputStream(
+						"{\"type\": \"FeatureCollection\", \"features\": [".getBytes(StandardCharsets.UTF_8)),
+				new InputStream() {
+					@Override
+					public int read() throws IOException {
+						throw new IOException("connection reset");
+					}
+				});
+		try (GeoJsonFeatureReader reader = GeoJsonFeatureReader.open(failing, ReaderOptions.drafts())) {
+			assertThatThrownBy(reader::next).isInstanceOf(UncheckedIOException.class)
+				.hasMessageContaining("connection reset");
+		}
 	}
 
 	// ---- helpers

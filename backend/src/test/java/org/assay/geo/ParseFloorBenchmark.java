@@ -36,7 +36,7 @@ import tools.jackson.core.json.JsonFactory;
  * CPU time: on a shared machine the wall clock also counts time spent waiting for a core,
  * the CPU time does not.
  */
-public final class ParseFloorBenchmark {
+final class ParseFloorBenchmark {
 
 	private static final int PASSES = 3;
 
