@@ -24,6 +24,8 @@ final class CoordinateReader {
 
 	private final int maxPositions;
 
+	private final int maxArrays;
+
 	private CoordinateBuffer buffer;
 
 	private int[] path = new int[8];
@@ -33,6 +35,10 @@ final class CoordinateReader {
 	CoordinateReader(JsonParser parser, int maxPositions) {
 		this.parser = parser;
 		this.maxPositions = maxPositions;
+		// Each line or ring needs two or more positions, so a geometry within the
+		// position limit opens far fewer arrays than this; the array limit only stops
+		// coordinates made of empty arrays, which hold no positions to count
+		this.maxArrays = maxPositions + 8;
 	}
 
 	/**
@@ -68,9 +74,9 @@ final class CoordinateReader {
 			fail(FeatureFault.BAD_POSITION, this.depth,
 					"found " + Tokens.describe(token) + " where a longitude or an array was expected");
 		}
-		if (this.buffer.arrays() >= this.maxPositions) {
+		if (this.buffer.arrays() >= this.maxArrays) {
 			fail(FeatureFault.TOO_MANY_COORDINATES, 0,
-					"its coordinates nest more than " + this.maxPositions + " arrays, the limit per feature");
+					"its coordinates hold more than " + this.maxArrays + " arrays, the limit per feature");
 		}
 		this.buffer.open();
 		int index = 0;

@@ -53,6 +53,8 @@ public final class GeoJsonFeatureReader implements Closeable {
 
 	private final CollectionReader collection;
 
+	private final PropertiesReader properties;
+
 	private final FeatureObjectReader featureReader;
 
 	private final FeatureAssembler assembler;
@@ -73,8 +75,8 @@ public final class GeoJsonFeatureReader implements Closeable {
 		this.parser = parser;
 		this.collection = new CollectionReader(parser);
 		CoordinateReader coordinates = new CoordinateReader(parser, options.maxCoordinatesPerFeature());
-		PropertiesReader properties = new PropertiesReader(parser, JSON, options.maxPropertiesBytes());
-		this.featureReader = new FeatureObjectReader(parser, coordinates, properties);
+		this.properties = new PropertiesReader(parser, options.maxPropertiesBytes());
+		this.featureReader = new FeatureObjectReader(parser, coordinates, this.properties);
 		this.assembler = new FeatureAssembler(options.requireConfidence());
 	}
 
@@ -83,9 +85,16 @@ public final class GeoJsonFeatureReader implements Closeable {
 	 * @param in the GeoJSON bytes (UTF-8)
 	 * @param options limits and requirements
 	 * @return the reader
+	 * @throws UncheckedIOException when the stream cannot be read
 	 */
 	public static GeoJsonFeatureReader open(InputStream in, ReaderOptions options) {
-		return new GeoJsonFeatureReader(JSON.createParser(ObjectReadContext.empty(), in), options);
+		try {
+			// Jackson reads the first bytes here, to tell the encoding
+			return new GeoJsonFeatureReader(JSON.createParser(ObjectReadContext.empty(), in), options);
+		}
+		catch (JacksonIOException ex) {
+			throw new UncheckedIOException(ex.getCause());
+		}
 	}
 
 	/**
@@ -183,6 +192,7 @@ public final class GeoJsonFeatureReader implements Closeable {
 
 	@Override
 	public void close() throws IOException {
+		this.properties.close();
 		this.parser.close();
 	}
 

@@ -97,21 +97,24 @@ final class GeometryBuilder {
 
 	private Coordinate[] positions(int level) {
 		open(level, "positions");
-		List<Coordinate> points = new ArrayList<>();
-		for (byte mark = this.buffer.shape(this.shapeAt); mark != CoordinateBuffer.CLOSE; mark = this.buffer
-			.shape(this.shapeAt)) {
-			if (mark != CoordinateBuffer.POSITION) {
-				this.path[level] = points.size();
-				throw fault(FeatureFault.BAD_POSITION, level + 1,
-						"found an array of arrays where a position was expected; the coordinates nest too deeply for a "
-								+ this.type.jsonName());
-			}
-			points.add(new Coordinate(this.buffer.x(this.positionAt), this.buffer.y(this.positionAt)));
-			this.positionAt++;
-			this.shapeAt++;
+		// counted first, so the array is made once at its size
+		int count = 0;
+		while (this.buffer.shape(this.shapeAt + count) == CoordinateBuffer.POSITION) {
+			count++;
 		}
-		this.shapeAt++;
-		return points.toArray(Coordinate[]::new);
+		if (this.buffer.shape(this.shapeAt + count) != CoordinateBuffer.CLOSE) {
+			this.path[level] = count;
+			throw fault(FeatureFault.BAD_POSITION, level + 1,
+					"found an array of arrays where a position was expected; the coordinates nest too deeply for a "
+							+ this.type.jsonName());
+		}
+		Coordinate[] points = new Coordinate[count];
+		for (int i = 0; i < count; i++) {
+			points[i] = new Coordinate(this.buffer.x(this.positionAt), this.buffer.y(this.positionAt));
+			this.positionAt++;
+		}
+		this.shapeAt += count + 1;
+		return points;
 	}
 
 	private void open(int level, String what) {

@@ -1,14 +1,10 @@
 package org.assay.geo;
 
-import java.io.OutputStream;
-import java.nio.charset.StandardCharsets;
-import java.util.Arrays;
-
 import tools.jackson.core.JsonGenerator;
 import tools.jackson.core.JsonParser;
 import tools.jackson.core.JsonToken;
 import tools.jackson.core.ObjectWriteContext;
-import tools.jackson.core.TokenStreamFactory;
+import tools.jackson.core.json.JsonFactory;
 
 /**
  * Copies a feature's {@code properties} object to compact JSON text while picking out
@@ -19,16 +15,30 @@ import tools.jackson.core.TokenStreamFactory;
  */
 final class PropertiesReader {
 
+	// One generator writes the properties of every feature, one root value after
+	// another with nothing between, which saves making one per feature
+	private static final JsonFactory WRITER = JsonFactory.builder().rootValueSeparator((String) null).build();
+
 	private final JsonParser parser;
 
-	private final TokenStreamFactory factory;
+	private final BoundedBytes sink;
 
-	private final Sink sink;
+	private JsonGenerator out;
 
-	PropertiesReader(JsonParser parser, TokenStreamFactory factory, int maxBytes) {
+	PropertiesReader(JsonParser parser, int maxBytes) {
 		this.parser = parser;
-		this.factory = factory;
-		this.sink = new Sink(maxBytes);
+		this.sink = new BoundedBytes(maxBytes);
+	}
+
+	void close() {
+		discardGenerator();
+	}
+
+	private void discardGenerator() {
+		if (this.out != null) {
+			this.out.close();
+			this.out = null;
+		}
 	}
 
 	/**
@@ -45,10 +55,17 @@ final class PropertiesReader {
 		}
 		int outer = this.parser.streamReadContext().getNestingDepth();
 		this.sink.reset();
-		boolean copied;
-		try (JsonGenerator out = this.factory.createGenerator(ObjectWriteContext.empty(), this.sink)) {
-			copied = copy(out, draft);
-			out.flush();
+		if (this.out == null) {
+			this.out = WRITER.createGenerator(ObjectWriteContext.empty(), this.sink);
+		}
+		boolean copied = copy(this.out, draft);
+		if (copied && this.out.streamWriteContext().inRoot()) {
+			this.out.flush();
+		}
+		else {
+			// the copy stopped inside the object: this generator cannot write the next
+			// one
+			discardGenerator();
 		}
 		skipRest(outer);
 		if (!copied) {
@@ -56,7 +73,7 @@ final class PropertiesReader {
 		}
 		if (this.sink.overflowed()) {
 			draft.fail(FeatureFault.PROPERTIES_TOO_LARGE,
-					"its properties are larger than " + this.sink.limit + " bytes, the limit per feature");
+					"its properties are larger than " + this.sink.limit() + " bytes, the limit per feature");
 			return;
 		}
 		draft.propertiesJson = this.sink.text();
@@ -160,51 +177,6 @@ final class PropertiesReader {
 				return;
 			}
 		}
-	}
-
-	/** A byte buffer that keeps at most the limit and remembers whether more came. */
-	private static final class Sink extends OutputStream {
-
-		private final int limit;
-
-		private byte[] bytes = new byte[1024];
-
-		private long count;
-
-		Sink(int limit) {
-			this.limit = limit;
-		}
-
-		void reset() {
-			this.count = 0;
-		}
-
-		boolean overflowed() {
-			return this.count > this.limit;
-		}
-
-		String text() {
-			return new String(this.bytes, 0, (int) this.count, StandardCharsets.UTF_8);
-		}
-
-		@Override
-		public void write(int b) {
-			write(new byte[] { (byte) b }, 0, 1);
-		}
-
-		@Override
-		public void write(byte[] source, int offset, int length) {
-			long end = this.count + length;
-			if (end <= this.limit) {
-				if (end > this.bytes.length) {
-					this.bytes = Arrays.copyOf(this.bytes,
-							(int) Math.min(this.limit, Math.max(end, this.bytes.length * 2L)));
-				}
-				System.arraycopy(source, offset, this.bytes, (int) this.count, length);
-			}
-			this.count = end;
-		}
-
 	}
 
 }
