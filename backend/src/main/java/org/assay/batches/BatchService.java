@@ -53,6 +53,14 @@ public class BatchService {
 	}
 
 	/**
+	 * How many batches are stored.
+	 * @return the number of batches
+	 */
+	public long count() {
+		return this.jdbc.queryForObject("select count(*) from batch", Long.class);
+	}
+
+	/**
 	 * A batch by id.
 	 * @param id the batch id
 	 * @return the batch
