@@ -2,6 +2,8 @@ package org.assay.batches;
 
 import java.net.URI;
 
+import org.springframework.core.Ordered;
+import org.springframework.core.annotation.Order;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.ProblemDetail;
 import org.springframework.web.bind.annotation.ExceptionHandler;
@@ -12,6 +14,7 @@ import org.springframework.web.multipart.MaxUploadSizeExceededException;
  * Reports an upload over the size limit as a problem naming the fault.
  */
 @RestControllerAdvice
+@Order(Ordered.HIGHEST_PRECEDENCE)
 class UploadLimitAdvice {
 
 	@ExceptionHandler(MaxUploadSizeExceededException.class)
