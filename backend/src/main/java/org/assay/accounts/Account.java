@@ -1,14 +1,17 @@
 package org.assay.accounts;
 
+import java.io.Serializable;
+
 /**
- * A person known to Assay, as other modules see them.
+ * A person known to Assay, as other modules see them. Serializable, since it is kept in
+ * the database-backed browser session.
  *
  * @param id the account id
  * @param username the sign-in name
  * @param displayName the name shown to others
  * @param role the role
  */
-public record Account(long id, String username, String displayName, Role role) {
+public record Account(long id, String username, String displayName, Role role) implements Serializable {
 
 	/**
 	 * Whether this account is an administrator.
