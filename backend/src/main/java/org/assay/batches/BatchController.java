@@ -92,8 +92,9 @@ class BatchController {
 
 	@GetMapping("/api/uploads/{id}")
 	UploadStatus job(@PathVariable UUID id) {
-		this.accounts.current();
+		Account account = this.accounts.current();
 		return this.uploads.status(id)
+			.filter((status) -> status.createdBy() == account.id() || account.isAdmin())
 			.orElseThrow(() -> new ResponseStatusException(HttpStatus.NOT_FOUND, "No upload job " + id));
 	}
 

@@ -1,5 +1,7 @@
 package org.assay.batches;
 
+import java.sql.ResultSet;
+import java.sql.SQLException;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
 import java.util.Map;
@@ -79,21 +81,22 @@ class UploadJobStore {
 
 	Optional<UploadStatus> find(UUID id) {
 		return this.jdbc
-			.query("select id, state, stage, bytes_total, drafts_parsed, cells_made, batch_id, problem, created_at,"
-					+ " updated_at from upload_job where id = ?", (rs, n) -> {
-						String problem = rs.getString(8);
-						Number batchId = (Number) rs.getObject(7);
-						return new UploadStatus(rs.getObject(1, UUID.class),
-								UploadStatus.State.valueOf(rs.getString(2)), rs.getString(3), rs.getLong(4),
-								rs.getLong(5), rs.getInt(6), (batchId != null) ? batchId.longValue() : null,
-								(problem != null)
-										? this.json.readValue(problem, new TypeReference<Map<String, Object>>() {
-										}) : null,
-								rs.getObject(9, OffsetDateTime.class).toInstant(),
-								rs.getObject(10, OffsetDateTime.class).toInstant());
-					}, id)
+			.query("select id, created_by, state, stage, bytes_total, drafts_parsed, cells_made, batch_id,"
+					+ " problem, created_at, updated_at from upload_job where id = ?", this::map, id)
 			.stream()
 			.findFirst();
+	}
+
+	private UploadStatus map(ResultSet rs, int row) throws SQLException {
+		String problem = rs.getString(9);
+		Number batchId = (Number) rs.getObject(8);
+		Map<String, Object> problemBody = (problem != null)
+				? this.json.readValue(problem, new TypeReference<Map<String, Object>>() {
+				}) : null;
+		return new UploadStatus(rs.getObject(1, UUID.class), rs.getLong(2), UploadStatus.State.valueOf(rs.getString(3)),
+				rs.getString(4), rs.getLong(5), rs.getLong(6), rs.getInt(7),
+				(batchId != null) ? batchId.longValue() : null, problemBody,
+				rs.getObject(10, OffsetDateTime.class).toInstant(), rs.getObject(11, OffsetDateTime.class).toInstant());
 	}
 
 	private static OffsetDateTime now() {

@@ -8,6 +8,7 @@ import java.util.UUID;
  * The progress of one upload job, readable while it runs and after it ends.
  *
  * @param id the job id
+ * @param createdBy the account that started it
  * @param state QUEUED, RUNNING, DONE or FAILED
  * @param stage what the job is doing: received, parsing, splitting, writing, done
  * @param bytesTotal size of the uploaded drafts file
@@ -18,8 +19,8 @@ import java.util.UUID;
  * @param createdAt when the job started
  * @param updatedAt when it last reported
  */
-public record UploadStatus(UUID id, State state, String stage, long bytesTotal, long draftsParsed, int cellsMade,
-		Long batchId, Map<String, Object> problem, Instant createdAt, Instant updatedAt) {
+public record UploadStatus(UUID id, long createdBy, State state, String stage, long bytesTotal, long draftsParsed,
+		int cellsMade, Long batchId, Map<String, Object> problem, Instant createdAt, Instant updatedAt) {
 
 	/** The states of a job. */
 	public enum State {

@@ -174,6 +174,12 @@ abstract class BatchFlowScenarios {
 				Map.of("draftId", draftId, "verdict", "ACCEPT"));
 		assertThat(verdict.status()).isEqualTo(409);
 		assertThat(ApiClient.anonymous(this.port).get("/api/batches").status()).isEqualTo(401);
+		String job = this.lead.upload(Map.of("name", "job"), Map.of("drafts", TestBatches.drafts(3, 0)), "wait=true")
+			.json()
+			.get("id")
+			.asString();
+		assertThat(this.lead.get("/api/uploads/" + job).status()).isEqualTo(200);
+		assertThat(this.validator.get("/api/uploads/" + job).status()).as("another's upload job").isEqualTo(404);
 	}
 
 }
