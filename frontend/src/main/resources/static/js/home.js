@@ -5,7 +5,7 @@ import { byId, el, fillBar, say, timeOfDay } from './dom.js';
 import { isLead, showSignedIn } from './session.js';
 
 const number = new Intl.NumberFormat();
-const STATE_NAMES = { PREVIEW: 'Preview', OPEN: 'Open', CLOSED: 'Closed' };
+const STATE_NAMES = { OPEN: 'Open', PAUSED: 'Paused', CLOSED: 'Closed' };
 
 function bar(part, whole) {
   const node = el('span', { className: 'bar', 'aria-hidden': 'true' }, el('span', { className: 'bar-fill' }));

@@ -61,7 +61,7 @@ export function showDraft(review) {
   decided.hidden = !v;
   if (v) {
     decided.dataset.verdict = v.verdict;
-    const by = [v.validator ? `by ${v.validator}` : '', v.decidedAt ? `at ${timeOfDay(v.decidedAt)}` : ''].join(' ').trim();
+    const by = [v.validator ? `by ${v.validator}` : '', v.createdAt ? `at ${timeOfDay(v.createdAt)}` : ''].join(' ').trim();
     decided.replaceChildren(`${STATES[v.verdict]?.label || v.verdict}: ${review.reasonLabel(v.verdict, v.reasonCode)}`,
       v.comment ? ` “${v.comment}”` : '', by ? el('span', { className: 'decided-by' }, by) : '');
   }
