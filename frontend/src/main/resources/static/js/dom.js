@@ -31,6 +31,9 @@ export function fillBar(bar, part, whole) {
   bar.firstElementChild.style.width = percent(part, whole) + '%';
 }
 
+/** A cell's number as people count: the server's `seq` starts at 0. */
+export const cellNumber = (cell) => cell.seq + 1;
+
 export function timeOfDay(iso) {
   if (!iso) return '';
   return new Date(iso).toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' });

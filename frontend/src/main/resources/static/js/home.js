@@ -1,11 +1,11 @@
 // The start page: my cells to resume, the batches with their progress, and taking the next cell.
 
 import { get, post } from './api.js';
-import { byId, el, fillBar, say, timeOfDay } from './dom.js';
+import { byId, cellNumber, el, fillBar, say, timeOfDay } from './dom.js';
 import { isLead, showSignedIn } from './session.js';
 
 const number = new Intl.NumberFormat();
-const STATE_NAMES = { PREVIEW: 'Preview', OPEN: 'Open', CLOSED: 'Closed' };
+const STATE_NAMES = { OPEN: 'Open', PAUSED: 'Paused', CLOSED: 'Closed' };
 
 function bar(part, whole) {
   const node = el('span', { className: 'bar', 'aria-hidden': 'true' }, el('span', { className: 'bar-fill' }));
@@ -67,11 +67,11 @@ function cellItem(cell, batchesById, me) {
   const note = mine && cell.leaseExpiresAt ? `held until ${timeOfDay(cell.leaseExpiresAt)}` : 'assigned to you';
   return el('li', { className: 'cell-item' },
     el('div', {},
-      el('span', { className: 'cell-title' }, `Cell ${cell.seq}`),
+      el('span', { className: 'cell-title' }, `Cell ${cellNumber(cell)}`),
       el('span', { className: 'muted' }, ` · ${batch ? batch.name : 'Batch ' + cell.batchId} · ${note}`)),
     progress(cell.decidedCount, cell.draftCount),
     el('a', { className: 'button', href: `work.html?cell=${encodeURIComponent(cell.id)}` },
-      cell.finished ? 'Open' : 'Resume', el('span', { className: 'visually-hidden' }, ` cell ${cell.seq}`)));
+      cell.finished ? 'Open' : 'Resume', el('span', { className: 'visually-hidden' }, ` cell ${cellNumber(cell)}`)));
 }
 
 async function start() {

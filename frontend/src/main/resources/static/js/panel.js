@@ -1,7 +1,7 @@
 // The review panel beside the map: the cell's progress, the current draft's facts, and the
 // verdict being chosen. It only writes the DOM; work.js decides what happens.
 
-import { byId, el, fillBar, say, timeOfDay } from './dom.js';
+import { byId, cellNumber, el, fillBar, say, timeOfDay } from './dom.js';
 import { kindName } from './layers.js';
 import { sample } from './legend.js';
 import { draftCasing, draftLine, STATES, VERDICTS } from './styles.js';
@@ -22,8 +22,9 @@ export function buildVerdictButtons(onChoose) {
 
 export function showCell(review, batch) {
   const cell = review.cell;
-  byId('cell-title').textContent = `Cell ${cell.seq}`;
-  document.title = `Cell ${cell.seq} · ${batch ? batch.name : 'Assay'}`;
+  const of = batch ? ` of ${batch.cellCount}` : '';
+  byId('cell-title').textContent = `Cell ${cellNumber(cell)}${of}`;
+  document.title = `Cell ${cellNumber(cell)} · ${batch ? batch.name : 'Assay'}`;
   byId('cell-batch').textContent = batch ? [batch.name, batch.modelName, batch.modelVersion].filter(Boolean).join(' · ') : '';
   byId('cell-progress').textContent = `${review.decided} / ${review.count} decided`;
   fillBar(byId('cell-bar'), review.decided, review.count);
@@ -61,7 +62,7 @@ export function showDraft(review) {
   decided.hidden = !v;
   if (v) {
     decided.dataset.verdict = v.verdict;
-    const by = [v.validator ? `by ${v.validator}` : '', v.decidedAt ? `at ${timeOfDay(v.decidedAt)}` : ''].join(' ').trim();
+    const by = [v.validator ? `by ${v.validator}` : '', v.createdAt ? `at ${timeOfDay(v.createdAt)}` : ''].join(' ').trim();
     decided.replaceChildren(`${STATES[v.verdict]?.label || v.verdict}: ${review.reasonLabel(v.verdict, v.reasonCode)}`,
       v.comment ? ` “${v.comment}”` : '', by ? el('span', { className: 'decided-by' }, by) : '');
   }
@@ -100,10 +101,15 @@ export function showChoice(review, choice, onPick) {
   byId('record').disabled = !(choice && choice.reasonCode);
 }
 
-/** Puts focus where Enter records: the chosen reason, else the first one. */
+/** Puts focus where Enter records (the chosen reason, else the first one) and brings all reasons into view. */
 export function focusReasons() {
   const radio = byId('reason-list').querySelector('input:checked') || byId('reason-list').querySelector('input');
-  (radio || byId('record')).focus();
+  if (!radio) {
+    byId('record').focus();
+    return;
+  }
+  radio.focus({ preventScroll: true });
+  byId('reasons').scrollIntoView({ block: 'nearest' });
 }
 
 export const status = (text, kind) => say(byId('review-status'), text, kind);

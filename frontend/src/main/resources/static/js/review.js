@@ -78,12 +78,13 @@ export class Review {
     return false;
   }
 
-  /** Records the server's answer to a verdict on the draft and the cell. */
+  /** Records the server's answer to a verdict (the same shape as a draft's `verdict`) on the draft and the cell. */
   recorded(draft, body, answer, username) {
+    const { cell, ...verdict } = answer;
     draft.properties.verdict = {
-      id: answer.id, verdict: body.verdict, reasonCode: body.reasonCode, comment: body.comment,
-      validator: username, decidedAt: answer.createdAt, geometry: body.geometry || null,
+      verdict: body.verdict, reasonCode: body.reasonCode, comment: body.comment, validator: username,
+      ...verdict, geometry: verdict.geometry || body.geometry || null,
     };
-    Object.assign(this.cell, answer.cell);
+    Object.assign(this.cell, cell);
   }
 }

@@ -44,7 +44,9 @@ async function start() {
     location.replace(destination());
     return;
   }
-  byId('signin-form').addEventListener('submit', submit);
+  const form = byId('signin-form');
+  form.addEventListener('submit', submit);
+  form.querySelector('button[type=submit]').disabled = false;
   byId('username').focus();
 }
 

@@ -1,5 +1,5 @@
 /**
- * Test support: a real PostgreSQL database per test class, an HTTP client for the API,
- * and generated GeoJSON inputs.
+ * Test support: a real PostgreSQL database per test class, an HTTP client for the API, a
+ * headless Chromium, and generated GeoJSON inputs.
  */
 package org.assay.support;
