@@ -3,6 +3,7 @@ package org.assay.accounts;
 import java.util.Collection;
 import java.util.List;
 
+import org.springframework.security.core.CredentialsContainer;
 import org.springframework.security.core.GrantedAuthority;
 import org.springframework.security.core.authority.SimpleGrantedAuthority;
 import org.springframework.security.core.userdetails.UserDetails;
@@ -11,13 +12,13 @@ import org.springframework.security.core.userdetails.UserDetails;
  * The signed-in person as Spring Security holds them; stored in the session, so it is
  * small and serializable.
  */
-final class AccountPrincipal implements UserDetails {
+final class AccountPrincipal implements UserDetails, CredentialsContainer {
 
 	private static final long serialVersionUID = 1L;
 
 	private final Account account;
 
-	private final String passwordHash;
+	private String passwordHash;
 
 	private final boolean enabled;
 
@@ -44,6 +45,14 @@ final class AccountPrincipal implements UserDetails {
 	@Override
 	public String getUsername() {
 		return this.account.username();
+	}
+
+	/**
+	 * Drops the password hash after sign-in, so that it is never stored in the session.
+	 */
+	@Override
+	public void eraseCredentials() {
+		this.passwordHash = null;
 	}
 
 	@Override
