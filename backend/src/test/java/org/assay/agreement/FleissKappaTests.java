@@ -20,7 +20,7 @@ class FleissKappaTests {
 	// Fleiss (1971), 30 patients x 6 psychiatrists x 5 diagnoses, as the R package irr
 	// ships it (data "diagnoses") and statsmodels' test_inter_rater.py copies it; one row
 	// per patient, the diagnosis (1..5) of each rater
-	private static final int[][] DIAGNOSES = { { 4, 4, 4, 4, 4, 4 }, { 2, 2, 2, 5, 5, 5 }, { 2, 3, 3, 3, 3, 5 },
+	static final int[][] DIAGNOSES = { { 4, 4, 4, 4, 4, 4 }, { 2, 2, 2, 5, 5, 5 }, { 2, 3, 3, 3, 3, 5 },
 			{ 5, 5, 5, 5, 5, 5 }, { 2, 2, 2, 4, 4, 4 }, { 1, 1, 3, 3, 3, 3 }, { 3, 3, 3, 3, 5, 5 },
 			{ 1, 1, 3, 3, 3, 4 }, { 1, 1, 4, 4, 4, 4 }, { 5, 5, 5, 5, 5, 5 }, { 1, 4, 4, 4, 4, 4 },
 			{ 1, 2, 4, 4, 4, 4 }, { 2, 2, 2, 3, 3, 3 }, { 1, 4, 4, 4, 4, 4 }, { 2, 2, 4, 4, 4, 5 },
