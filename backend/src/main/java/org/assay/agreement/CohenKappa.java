@@ -14,9 +14,10 @@ import java.util.Optional;
  *   p_o = &Sigma; w_ij p_ij      p_e = &Sigma; w_ij r_i c_j      kappa = (p_o - p_e) / (1 - p_e)
  * </pre> (Cohen, J. 1960, A coefficient of agreement for nominal scales, Educational and
  * Psychological Measurement 20:37-46; weighted: Cohen 1968, Psychological Bulletin
- * 70:213-220). With w&#772;<sub>i.</sub> = &Sigma;<sub>j</sub> c<sub>j</sub>
- * w<sub>ij</sub> and w&#772;<sub>.j</sub> = &Sigma;<sub>i</sub> r<sub>i</sub>
- * w<sub>ij</sub>, the asymptotic variance and the variance under H0: kappa = 0 are <pre>
+ * 70:213-220, citation from memory). With w&#772;<sub>i.</sub> = &Sigma;<sub>j</sub>
+ * c<sub>j</sub> w<sub>ij</sub> and w&#772;<sub>.j</sub> = &Sigma;<sub>i</sub>
+ * r<sub>i</sub> w<sub>ij</sub>, the asymptotic variance and the variance under H0: kappa
+ * = 0 are <pre>
  *   var  = [&Sigma; p_ij (w_ij - (w&#772;_i. + w&#772;_.j)(1 - kappa))&sup2; - (kappa - p_e(1 - kappa))&sup2;] / (n (1 - p_e)&sup2;)
  *   var0 = [&Sigma; r_i c_j (w_ij - (w&#772;_i. + w&#772;_.j))&sup2; - p_e&sup2;] / (n (1 - p_e)&sup2;)
  * </pre> from Fleiss, J.L., Cohen, J., Everitt, B.S. (1969), Large sample standard errors
@@ -98,7 +99,8 @@ public final class CohenKappa {
 
 	/**
 	 * Weighted kappa with linear weights w<sub>ij</sub> = 1 - |i - j| / (k - 1), for
-	 * ordered categories (Cicchetti and Allison 1971).
+	 * ordered categories (Cicchetti and Allison 1971, from memory), as SAS and
+	 * statsmodels name them.
 	 * @param counts k&times;k counts, first rater in rows, second in columns
 	 * @return the statistics
 	 */

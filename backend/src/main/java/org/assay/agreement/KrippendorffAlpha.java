@@ -24,10 +24,14 @@ import java.util.Optional;
  *
  * <p>
  * For two coders, nominal data and no missing values, n = 2N for N units and alpha = 1 -
- * (n - 1)/n &middot; (1 - pi), where pi is Scott's (1955) pi; so alpha exceeds pi by (1 -
- * pi)/(2N), vanishing as N grows. More generally, with m coders and no missing values,
- * alpha = 1 - (n - 1)/n &middot; (1 - kappa) with Fleiss' (1971) kappa and n = Nm
- * (derivation: D_o = 1 - P&#772; and D_e = n/(n - 1) &middot; (1 - P&#772;_e)).
+ * (n - 1)/n &middot; (1 - pi), where pi is Scott's pi (Scott, W.A. 1955, Reliability of
+ * content analysis: the case of nominal scale coding, Public Opinion Quarterly
+ * 19:321-325; citation from memory); so alpha exceeds pi by (1 - pi)/(2N), vanishing as N
+ * grows. Krippendorff presents alpha for this case as pi corrected for small samples
+ * (from memory); the relation here is derived from the formulas above. More generally,
+ * with m coders and no missing values, alpha = 1 - (n - 1)/n &middot; (1 - kappa) with
+ * Fleiss' (1971) kappa and n = Nm (derivation: D_o = 1 - P&#772; and D_e = n/(n - 1)
+ * &middot; (1 - P&#772;_e)).
  *
  * <p>
  * Alpha is NaN, with a reason, when no unit has two values (nothing is pairable) and when

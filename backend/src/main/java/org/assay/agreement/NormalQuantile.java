@@ -9,8 +9,8 @@ package org.assay.agreement;
  * Other levels are found by Newton's method on erf(y) = c with z = &radic;2&middot;y,
  * started at y = 0, where erf is concave so the iterates rise to the root without
  * overshooting. erf is summed from the series with positive terms (Abramowitz and Stegun
- * 1964, eq. 7.1.6): erf(y) = 2/&radic;&pi; &middot; e<sup>-y&sup2;</sup> &middot;
- * &Sigma;<sub>k&ge;0</sub> 2<sup>k</sup> y<sup>2k+1</sup> /
+ * 1964, eq. 7.1.6, from memory): erf(y) = 2/&radic;&pi; &middot; e<sup>-y&sup2;</sup>
+ * &middot; &Sigma;<sub>k&ge;0</sub> 2<sup>k</sup> y<sup>2k+1</sup> /
  * (1&middot;3&middot;&hellip;(2k+1)), which has no cancellation. The result is good to
  * about 1e-13 for levels up to 0.9999; beyond that the absolute error of erf near 1 grows
  * relative to the tail it leaves.
