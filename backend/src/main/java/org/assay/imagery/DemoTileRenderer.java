@@ -21,9 +21,9 @@ import org.locationtech.jts.geom.Envelope;
  * Draws one 256 x 256 tile of synthetic imagery from the demo's true world, in this
  * order: sea, beach and land; fields with their rows or trees; tracks, streets and main
  * roads at their width in metres (never thinner than about a pixel); buildings' shadows
- * and roofs; then tree cover over everything, so that a road under woods cannot be seen;
- * last a texture and a grain. Anti-aliased; deterministic, since all noise is a hash of
- * world or pixel coordinates.
+ * and roofs; the shadows of the woods; then tree cover over everything, so that a road
+ * under woods cannot be seen; last a texture and a grain. Anti-aliased; deterministic,
+ * since all noise is a hash of world or pixel coordinates.
  *
  * <p>
  * Limits: the sun, the roof shapes and the canopy are crude; a road is drawn where the
@@ -32,7 +32,7 @@ import org.locationtech.jts.geom.Envelope;
 final class DemoTileRenderer {
 
 	/** Raise when the drawing changes, so that cached tiles are drawn anew. */
-	static final int VERSION = 1;
+	static final int VERSION = 2;
 
 	/**
 	 * How far beyond the tile features are picked, metres: wider than any road or shadow.
@@ -84,8 +84,12 @@ final class DemoTileRenderer {
 			for (Building building : this.index.buildings(search)) {
 				drawBuilding(g, frame, building);
 			}
+			double treeShadow = frame.pixels(7);
+			g.setColor(Palette.SHADOW);
 			for (Woods patch : this.index.woods(search)) {
-				fillMask(woods, frame.path(patch.geometry()));
+				Path2D outline = frame.path(patch.geometry());
+				g.fill(AffineTransform.getTranslateInstance(treeShadow, treeShadow).createTransformedShape(outline));
+				fillMask(woods, outline);
 			}
 		}
 		g.dispose();

@@ -37,6 +37,25 @@ final class Noise {
 		return lerp(top, bottom, fy);
 	}
 
+	/**
+	 * Tree crowns: one crown centre jittered inside each lattice cell, and the value at a
+	 * point rising from 0 at a crown's rim to 1 at its centre (cellular noise of the
+	 * nearest centre, in lattice units).
+	 */
+	static double crowns(double x, double y, long seed) {
+		long cx = (long) Math.floor(x);
+		long cy = (long) Math.floor(y);
+		double nearest = Double.MAX_VALUE;
+		for (long i = cx - 1; i <= cx + 1; i++) {
+			for (long j = cy - 1; j <= cy + 1; j++) {
+				double dx = i + hash(i, j, seed) - x;
+				double dy = j + hash(j, i, seed + 1) - y;
+				nearest = Math.min(nearest, dx * dx + dy * dy);
+			}
+		}
+		return Math.max(0, 1 - Math.sqrt(nearest) / 0.8);
+	}
+
 	private static double smooth(double t) {
 		return t * t * (3 - 2 * t);
 	}

@@ -5,7 +5,7 @@ import java.awt.image.BufferedImage;
 /**
  * The per-pixel finish of a tile: a mottled brightness over the land (two octaves of
  * value noise at 20 m and 5 m, anchored to the projected world), tree canopy wherever the
- * woods mask is set (crowns of a few metres, dark green, covering whatever was drawn
+ * woods mask is set (crowns of about four metres, dark green, covering whatever was drawn
  * beneath), and a faint grain everywhere, seeded by the pixel's place in the whole zoom
  * level.
  */
@@ -75,9 +75,8 @@ final class SurfaceFinish {
 				}
 				double woodsShare = (woods.getRaster().getSample(column, row, 0)) / 255.0;
 				if (woodsShare > 0) {
-					double crowns = 0.6 * Noise.value(easting / 3.5, northing / 3.5, 3)
-							+ 0.4 * Noise.value(easting / 11, northing / 11, 4);
-					double shade = 0.6 + 0.75 * crowns;
+					double crowns = Noise.crowns(easting / 4.5, northing / 4.5, 3);
+					double shade = 0.5 + 0.5 * crowns + 0.4 * Noise.value(easting / 25, northing / 25, 4);
 					r += woodsShare * (Palette.CANOPY.getRed() * shade - r);
 					g += woodsShare * (Palette.CANOPY.getGreen() * shade - g);
 					b += woodsShare * (Palette.CANOPY.getBlue() * shade - b);
