@@ -20,13 +20,13 @@ import org.assay.geo.WebMercatorQuad.Tile;
  * request and cached on disk. Tiles that show no land share one sea tile held in memory,
  * so that no crawl of the open ocean can fill the disk.
  */
-public class DemoImagery {
+final class DemoImagery {
 
 	/** The lowest zoom served. */
-	public static final int MIN_ZOOM = 12;
+	static final int MIN_ZOOM = 12;
 
 	/** The highest zoom served. */
-	public static final int MAX_ZOOM = 19;
+	static final int MAX_ZOOM = 19;
 
 	private final Supplier<DemoWorld> world;
 
@@ -41,7 +41,7 @@ public class DemoImagery {
 	 * @param world supplies the true world, called once on the first request
 	 * @param cacheRoot where tiles are stored
 	 */
-	public DemoImagery(Supplier<DemoWorld> world, Path cacheRoot) {
+	DemoImagery(Supplier<DemoWorld> world, Path cacheRoot) {
 		this.world = world;
 		this.cache = new TileCache(cacheRoot, DemoTileRenderer.VERSION);
 	}
@@ -51,7 +51,7 @@ public class DemoImagery {
 	 * @param cacheRoot where tiles are stored
 	 * @return the imagery, generating the scenario on first request
 	 */
-	public static DemoImagery ofDefaultScenario(Path cacheRoot) {
+	static DemoImagery ofDefaultScenario(Path cacheRoot) {
 		return new DemoImagery(() -> DemoScenario.generate().world(), cacheRoot);
 	}
 
@@ -62,7 +62,7 @@ public class DemoImagery {
 	 * @param y the row
 	 * @return the PNG bytes, or empty outside zoom 12 to 19 or the tile matrix
 	 */
-	public Optional<byte[]> tile(int z, long x, long y) {
+	Optional<byte[]> tile(int z, long x, long y) {
 		if (z < MIN_ZOOM || z > MAX_ZOOM || !WebMercatorQuad.contains(z, x, y)) {
 			return Optional.empty();
 		}
