@@ -10,7 +10,8 @@ import org.springframework.web.server.ResponseStatusException;
  */
 final class SettingsCheck {
 
-	private static final Pattern TILE_TEMPLATE = Pattern.compile("^https?://[^\\s]+$");
+	/** An absolute http(s) template, or a same-origin path (one slash, not two). */
+	private static final Pattern TILE_TEMPLATE = Pattern.compile("^(https?://|/(?!/))[^\\s]+$");
 
 	private SettingsCheck() {
 	}
@@ -30,7 +31,7 @@ final class SettingsCheck {
 		String url = settings.imageryUrl();
 		require(url == null || (url.length() <= 2000 && TILE_TEMPLATE.matcher(url).matches() && url.contains("{z}")
 				&& url.contains("{x}") && url.contains("{y}")),
-				"imageryUrl must be an http(s) XYZ template with {z}, {x} and {y}");
+				"imageryUrl must be an http(s) or same-origin (/...) XYZ template with {z}, {x} and {y}");
 	}
 
 	private static void require(boolean condition, String message) {

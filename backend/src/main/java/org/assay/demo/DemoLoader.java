@@ -72,8 +72,9 @@ class DemoLoader implements ApplicationRunner {
 			scenario.writeReference(out);
 		}
 		UploadSettings settings = new UploadSettings("Brevanor island, first model run", "demo-segmenter", "0.9-demo",
-				null, CellLimits.DEFAULT.maxDrafts(), CellLimits.DEFAULT.maxRoadMetres() / 1000.0,
-				UploadSettings.DEFAULT_LEASE_MINUTES, UploadSettings.DEFAULT_CATALOGUE);
+				"/api/imagery/demo/{z}/{x}/{y}.png", CellLimits.DEFAULT.maxDrafts(),
+				CellLimits.DEFAULT.maxRoadMetres() / 1000.0, UploadSettings.DEFAULT_LEASE_MINUTES,
+				UploadSettings.DEFAULT_CATALOGUE);
 		UploadStatus status = this.uploads.submit(lead, settings, drafts, reference);
 		status = this.uploads.await(status.id(), Duration.ofMinutes(5));
 		if (status.state() != UploadStatus.State.DONE) {
