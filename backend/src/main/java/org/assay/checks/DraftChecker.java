@@ -1,0 +1,167 @@
+package org.assay.checks;
+
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.Collections;
+import java.util.Iterator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.atomic.LongAdder;
+import java.util.function.Consumer;
+import java.util.stream.IntStream;
+
+/**
+ * Runs all checks that are switched on over the drafts of a batch and the reference
+ * layer, on all cores, and hands out each draft's flags and risk.
+ *
+ * <p>
+ * The reference layer is held in memory, indexed ({@link ReferenceIndex}). The drafts are
+ * read once from an iterator and kept packed (16 bytes a position plus about 150 bytes a
+ * draft, no JTS geometry for roads; {@link DraftIndex}), because the checks compare
+ * drafts with their neighbours; results go to a consumer draft by draft, in the order
+ * read, and only drafts with flags hold a list while the checks run. So memory is the
+ * packed drafts, their index and the reference, whatever the input's encoding. Checks run
+ * in a {@link ForkJoinPool} of the given parallelism (default: all cores).
+ *
+ * <pre>
+ * List&lt;DraftFlags&gt; flags = DraftChecker.check(drafts, reference);
+ * </pre>
+ */
+public final class DraftChecker {
+
+	private final CheckSettings settings;
+
+	private final int parallelism;
+
+	/**
+	 * A checker with settings, on all cores.
+	 * @param settings the checks' settings
+	 */
+	public DraftChecker(CheckSettings settings) {
+		this(settings, Runtime.getRuntime().availableProcessors());
+	}
+
+	/**
+	 * A checker with settings and a number of threads.
+	 * @param settings the checks' settings
+	 * @param parallelism the threads to check on, at least 1
+	 */
+	public DraftChecker(CheckSettings settings, int parallelism) {
+		if (parallelism < 1) {
+			throw new IllegalArgumentException("parallelism must be at least 1");
+		}
+		this.settings = settings;
+		this.parallelism = parallelism;
+	}
+
+	/**
+	 * Checks drafts with the default settings.
+	 * @param drafts the drafts of a batch
+	 * @param reference the reference layer
+	 * @return each draft's flags, in the order of the drafts
+	 */
+	public static List<DraftFlags> check(Collection<CheckedDraft> drafts, Collection<MappedFeature> reference) {
+		List<DraftFlags> out = new ArrayList<>();
+		new DraftChecker(CheckSettings.DEFAULTS).run(drafts.iterator(), reference, out::add);
+		return out;
+	}
+
+	/**
+	 * Checks drafts.
+	 * @param drafts the drafts of a batch, read once; ids should be unique
+	 * @param reference the reference layer
+	 * @param sink receives each draft's flags, in the order of the drafts, on the calling
+	 * thread
+	 * @return where the time went
+	 */
+	public CheckTimings run(Iterator<CheckedDraft> drafts, Collection<MappedFeature> reference,
+			Consumer<DraftFlags> sink) {
+		Map<String, Long> phases = new LinkedHashMap<>();
+		long start = System.nanoTime();
+		ReferenceIndex referenceIndex = new ReferenceIndex(reference);
+		start = lap(phases, "reference", start);
+		DraftIndex draftIndex = new DraftIndex();
+		drafts.forEachRemaining(draftIndex::add);
+		draftIndex.build();
+		start = lap(phases, "drafts", start);
+		ForkJoinPool pool = new ForkJoinPool(this.parallelism);
+		try {
+			List<DraftCheck> checks = checks(referenceIndex, draftIndex, pool);
+			start = lap(phases, "connect", start);
+			Map<String, LongAdder> spent = new LinkedHashMap<>();
+			spent.put("frame", new LongAdder());
+			checks.forEach((check) -> spent.put(check.name(), new LongAdder()));
+			List<PackedFeature> all = draftIndex.drafts;
+			@SuppressWarnings("unchecked")
+			List<Flag>[] found = new List[all.size()];
+			pool.submit(() -> IntStream.range(0, all.size())
+				.parallel()
+				.forEach((i) -> found[i] = checkOne(all.get(i), checks, spent))).join();
+			start = lap(phases, "checks", start);
+			for (int i = 0; i < found.length; i++) {
+				List<Flag> flags = (found[i] != null) ? found[i] : List.of();
+				PackedFeature draft = all.get(i);
+				sink.accept(
+						new DraftFlags(draft.id, draft.confidence, flags, RiskScore.draft(draft.confidence, flags)));
+				found[i] = null;
+			}
+			lap(phases, "emit", start);
+			Map<String, Long> checkNanos = new LinkedHashMap<>();
+			spent.forEach((name, nanos) -> checkNanos.put(name, nanos.sum()));
+			return new CheckTimings(all.size(), reference.size(), Collections.unmodifiableMap(phases),
+					Collections.unmodifiableMap(checkNanos));
+		}
+		finally {
+			pool.shutdown();
+		}
+	}
+
+	private List<DraftCheck> checks(ReferenceIndex reference, DraftIndex drafts, ForkJoinPool pool) {
+		List<DraftCheck> checks = new ArrayList<>();
+		if (this.settings.mapped().enabled()) {
+			checks.add(new MappedAlreadyCheck(this.settings.mapped(), reference));
+		}
+		if (this.settings.nearMiss().enabled()) {
+			checks.add(new NearMissCheck(this.settings.nearMiss(), reference, drafts));
+		}
+		if (this.settings.crossing().enabled()) {
+			checks.add(new CrossingCheck(this.settings.crossing(), reference, drafts));
+		}
+		if (this.settings.isolation().enabled()) {
+			IsolatedPieceCheck isolation = new IsolatedPieceCheck(this.settings.isolation(), reference, drafts);
+			isolation.prepare(pool);
+			checks.add(isolation);
+		}
+		if (this.settings.shape().enabled()) {
+			checks.add(new LineShapeCheck(this.settings.shape()));
+		}
+		if (this.settings.building().enabled()) {
+			checks.add(new BuildingCheck(this.settings.building(), drafts));
+		}
+		return checks;
+	}
+
+	private static List<Flag> checkOne(PackedFeature draft, List<DraftCheck> checks, Map<String, LongAdder> spent) {
+		long t0 = System.nanoTime();
+		LocalDraft local = new LocalDraft(draft);
+		long t1 = System.nanoTime();
+		spent.get("frame").add(t1 - t0);
+		List<Flag> flags = new ArrayList<>(0);
+		for (DraftCheck check : checks) {
+			check.check(local, flags);
+			long t2 = System.nanoTime();
+			spent.get(check.name()).add(t2 - t1);
+			t1 = t2;
+		}
+		return flags.isEmpty() ? null : List.copyOf(flags);
+	}
+
+	private static long lap(Map<String, Long> phases, String name, long start) {
+		long now = System.nanoTime();
+		phases.put(name, now - start);
+		return now;
+	}
+
+}

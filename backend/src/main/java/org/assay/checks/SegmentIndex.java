@@ -1,0 +1,51 @@
+package org.assay.checks;
+
+import java.util.function.Consumer;
+
+import org.locationtech.jts.geom.Envelope;
+import org.locationtech.jts.index.strtree.STRtree;
+
+/**
+ * The segments of many features in a JTS {@link STRtree}, in chunks of up to
+ * {@value Chunk#MAX_SEGMENTS} segments, so that a long road is found only where a query
+ * box meets it. Built once, then queried from many threads.
+ */
+final class SegmentIndex {
+
+	private final STRtree tree = new STRtree();
+
+	private int size;
+
+	/** Adds the segments of every part of a feature. */
+	void add(PackedFeature feature) {
+		for (int p = 0; p < feature.partEnds.length; p++) {
+			int start = feature.partStart(p);
+			int last = feature.partEnds[p] - 1;
+			for (int from = start; from < last; from += Chunk.MAX_SEGMENTS) {
+				Chunk chunk = new Chunk(feature, from, Math.min(last, from + Chunk.MAX_SEGMENTS));
+				this.tree.insert(chunk, chunk);
+				this.size++;
+			}
+		}
+	}
+
+	/** Finishes the tree; call before querying from several threads. */
+	void build() {
+		if (this.size > 0) {
+			this.tree.build();
+		}
+	}
+
+	int size() {
+		return this.size;
+	}
+
+	/** Calls back for every chunk whose box meets the given box. */
+	void query(double minLon, double minLat, double maxLon, double maxLat, Consumer<Chunk> visitor) {
+		if (this.size == 0) {
+			return;
+		}
+		this.tree.query(new Envelope(minLon, maxLon, minLat, maxLat), (item) -> visitor.accept((Chunk) item));
+	}
+
+}
