@@ -8,6 +8,7 @@ import org.assay.geo.GeodesicMeasures;
 import org.locationtech.jts.algorithm.InteriorPoint;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.linearref.LengthIndexedLine;
 import org.locationtech.jts.operation.overlayng.OverlayNG;
 import org.locationtech.jts.operation.overlayng.OverlayNGRobust;
 
@@ -68,7 +69,11 @@ final class BuildingCheck implements DraftCheck {
 					OverlayNG.INTERSECTION);
 			if (!inside.isEmpty() && inside.getLength() >= this.settings.minInsideMetres()) {
 				Geometry lonLat = FrameGeometry.toLonLat(d.frame, inside);
-				Coordinate at = InteriorPoint.getInteriorPoint(lonLat);
+				Coordinate at = FrameGeometry
+					.toLonLat(d.frame,
+							inside.getFactory()
+								.createPoint(new LengthIndexedLine(inside).extractPoint(inside.getLength() / 2)))
+					.getCoordinate();
 				flags.add(Flag.of(FlagKind.ROAD_THROUGH_BUILDING)
 					.value("insideMetres", GeodesicMeasures.lengthMetres(lonLat))
 					.at(at.x, at.y)
