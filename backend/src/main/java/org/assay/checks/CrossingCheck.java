@@ -11,10 +11,12 @@ import java.util.Set;
  * <p>
  * Two segments cross when each has its ends strictly on both sides of the other (JTS's
  * robust orientation predicate). A crossing is a junction when both roads have a vertex
- * within {@code junctionMetres} of the crossing point, and it is a touching end, not a
- * crossing, when it lies within that distance of an end of either road (a road that stops
- * on another and overshoots by a few centimetres). Crossings of a draft with itself are
- * the shape check's {@link FlagKind#SELF_CROSSING}.
+ * within {@code junctionMetres} of the crossing point, and it is an overshooting end, not
+ * a crossing, when it lies within {@code endMetres} of an end of either road (a road that
+ * stops on another and runs a metre past it). Roads that meet at less than
+ * {@code minAngleDegrees} run along each other and are left to the already-on-the-map
+ * check. Crossings of a draft with itself are the shape check's
+ * {@link FlagKind#SELF_CROSSING}.
  *
  * <p>
  * One {@link FlagKind#CROSSING_UNJOINED} per other road crossed, at the first crossing
@@ -77,15 +79,20 @@ final class CrossingCheck implements DraftCheck {
 		double tol = this.settings.junctionMetres();
 		boolean draftVertex = near(cx, cy, d.x[i - 1], d.y[i - 1], tol) || near(cx, cy, d.x[i], d.y[i], tol);
 		boolean otherVertex = near(cx, cy, near.ax[s], near.ay[s], tol) || near(cx, cy, near.bx[s], near.by[s], tol);
-		if ((draftVertex && otherVertex) || nearDraftEnd(d, part, cx, cy, tol)
-				|| nearOtherEnd(d, near, s, cx, cy, tol)) {
+		double end = this.settings.endMetres();
+		if ((draftVertex && otherVertex) || nearDraftEnd(d, part, cx, cy, end)
+				|| nearOtherEnd(d, near, s, cx, cy, end)) {
 			return null;
 		}
 		double a1 = Math.atan2(d.y[i] - d.y[i - 1], d.x[i] - d.x[i - 1]);
 		double a2 = Math.atan2(near.by[s] - near.ay[s], near.bx[s] - near.ax[s]);
-		double angle = Math.abs(Math.toDegrees(a1 - a2)) % 180;
+		double turn = Math.abs(Math.toDegrees(a1 - a2)) % 180;
+		double angle = Math.min(turn, 180 - turn);
+		if (angle < this.settings.minAngleDegrees()) {
+			return null;
+		}
 		return Flag.of(FlagKind.CROSSING_UNJOINED)
-			.value("angleDegrees", Math.min(angle, 180 - angle))
+			.value("angleDegrees", angle)
 			.at(d.frame.lon(cx), d.frame.lat(cy))
 			.other(near.owner[s].id)
 			.build();
@@ -100,8 +107,8 @@ final class CrossingCheck implements DraftCheck {
 		PackedFeature other = near.owner[s];
 		for (int p = 0; p < other.partEnds.length; p++) {
 			int first = other.partStart(p), last = other.partEnds[p] - 1;
-			if ((near.vertex[s] == first && near(cx, cy, near.ax[s], near.ay[s], tol))
-					|| (near.vertex[s] + 1 == last && near(cx, cy, near.bx[s], near.by[s], tol))) {
+			if (near(cx, cy, d.frame.x(other.lon(first)), d.frame.y(other.lat(first)), tol)
+					|| near(cx, cy, d.frame.x(other.lon(last)), d.frame.y(other.lat(last)), tol)) {
 				return true;
 			}
 		}

@@ -13,13 +13,16 @@ import java.util.stream.IntStream;
  * road the model found alone.
  *
  * <p>
- * Connected means linked by a chain of drafts each touching the next (coming within
- * {@code touchMetres}, crossing included), found by union-find with path compression over
- * all road drafts before the per-draft checks run: the links are measured on all cores,
- * each draft against the drafts after it in the batch (so each pair once), then joined on
- * one thread. Lengths are summed in the drafts' frames for the decision; the reported
- * {@code totalMetres} is the sum of geodesic lengths (GeographicLib) of the set's drafts,
- * {@code drafts} the number of drafts in it.
+ * Connected means linked by a chain of drafts each joining the next: an end of one lies
+ * within {@code touchMetres} of the other, or they have vertices within
+ * {@code touchMetres} of each other (a junction). Roads that only cross do not join (that
+ * is the crossing check's {@link FlagKind#CROSSING_UNJOINED}); the same rule decides
+ * whether a set touches a mapped road. The sets are found by union-find with path
+ * compression over all road drafts before the per-draft checks run: the links are
+ * measured on all cores, each draft against the drafts after it in the batch (so each
+ * pair once), then joined on one thread. Lengths are summed in the drafts' frames for the
+ * decision; the reported {@code totalMetres} is the sum of geodesic lengths
+ * (GeographicLib) of the set's drafts, {@code drafts} the number of drafts in it.
  */
 final class IsolatedPieceCheck implements DraftCheck {
 
@@ -140,23 +143,45 @@ final class IsolatedPieceCheck implements DraftCheck {
 		return found;
 	}
 
+	/**
+	 * Whether the draft joins the segment's road: an end of either lies within the limit
+	 * of the other, or a vertex of each lies within the limit of the other's. Two roads
+	 * that only cross are not joined.
+	 */
 	private static boolean touches(LocalDraft d, NearbySegments near, int s, double limitSq) {
-		double limit = Math.sqrt(limitSq);
-		double minX = Math.min(near.ax[s], near.bx[s]) - limit, maxX = Math.max(near.ax[s], near.bx[s]) + limit;
-		double minY = Math.min(near.ay[s], near.by[s]) - limit, maxY = Math.max(near.ay[s], near.by[s]) + limit;
+		double ax = near.ax[s], ay = near.ay[s], bx = near.bx[s], by = near.by[s];
+		PackedFeature other = near.owner[s];
+		boolean startsPart = false, endsPart = false;
+		for (int p = 0; p < other.partEnds.length; p++) {
+			startsPart |= near.vertex[s] == other.partStart(p);
+			endsPart |= near.vertex[s] + 1 == other.partEnds[p] - 1;
+		}
 		for (int p = 0; p < d.parts(); p++) {
-			for (int i = d.partStart(p) + 1; i < d.partEnd(p); i++) {
-				if (Math.max(d.x[i - 1], d.x[i]) < minX || Math.min(d.x[i - 1], d.x[i]) > maxX
-						|| Math.max(d.y[i - 1], d.y[i]) < minY || Math.min(d.y[i - 1], d.y[i]) > maxY) {
-					continue;
+			int first = d.partStart(p), last = d.partEnd(p) - 1;
+			if (Planar.pointSegmentDistanceSq(d.x[first], d.y[first], ax, ay, bx, by) <= limitSq
+					|| Planar.pointSegmentDistanceSq(d.x[last], d.y[last], ax, ay, bx, by) <= limitSq) {
+				return true;
+			}
+			for (int i = first; i <= last; i++) {
+				if (close(d.x[i], d.y[i], ax, ay, limitSq) || close(d.x[i], d.y[i], bx, by, limitSq)) {
+					return true;
 				}
-				if (Planar.segmentDistanceSq(d.x[i - 1], d.y[i - 1], d.x[i], d.y[i], near.ax[s], near.ay[s], near.bx[s],
-						near.by[s]) <= limitSq) {
+				if (i > first && ((startsPart && segmentNear(d, i, ax, ay, limitSq))
+						|| (endsPart && segmentNear(d, i, bx, by, limitSq)))) {
 					return true;
 				}
 			}
 		}
 		return false;
+	}
+
+	private static boolean segmentNear(LocalDraft d, int i, double px, double py, double limitSq) {
+		return Planar.pointSegmentDistanceSq(px, py, d.x[i - 1], d.y[i - 1], d.x[i], d.y[i]) <= limitSq;
+	}
+
+	private static boolean close(double x1, double y1, double x2, double y2, double limitSq) {
+		double dx = x2 - x1, dy = y2 - y1;
+		return dx * dx + dy * dy <= limitSq;
 	}
 
 	@Override

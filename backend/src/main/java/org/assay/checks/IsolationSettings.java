@@ -6,8 +6,9 @@ package org.assay.checks;
  * @param enabled whether the check runs
  * @param maxTotalMetres a connected set of road drafts that touches no mapped road is
  * isolated when shorter than this in total (the issue's default: 200 m)
- * @param touchMetres roads closer than this touch (default 1 m, the near miss's smallest
- * gap: what is closer is not a miss)
+ * @param touchMetres roads join when an end of one, or a vertex of each, lies closer than
+ * this to the other (default 1 m, the near miss's smallest gap: what is closer is not a
+ * miss)
  */
 public record IsolationSettings(boolean enabled, double maxTotalMetres, double touchMetres) {
 

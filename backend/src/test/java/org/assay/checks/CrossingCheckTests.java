@@ -64,9 +64,27 @@ class CrossingCheckTests {
 	}
 
 	@Test
-	void takesAnEndThatOvershootsByCentimetresForATouch() {
+	void takesAnEndThatOvershootsByLessThanTwoMetresForATouch() {
 		Map<String, DraftFlags> flags = new Fixtures().mappedRoad("r1", "LINESTRING (50 -50, 50 50)")
-			.road("d1", "LINESTRING (0 0, 50.3 0)")
+			.road("d1", "LINESTRING (0 0, 51.5 0)")
+			.check(ONLY);
+		checkKinds(flags.get("d1"));
+	}
+
+	@Test
+	void flagsAnEndThatOvershootsByMoreThanTwoMetres() {
+		// d1 runs 3 m past r1
+		Flag flag = only(new Fixtures().mappedRoad("r1", "LINESTRING (50 -50, 50 50)")
+			.road("d1", "LINESTRING (0 0, 53 0)")
+			.check(ONLY), "d1", FlagKind.CROSSING_UNJOINED);
+		checkPoint(flag, 50, 0);
+	}
+
+	@Test
+	void leavesRoadsThatMeetAtAShallowAngleToTheDuplicateCheck() {
+		// (0, -1) to (100, 1) crosses y = 0 at atan(2/100) = 1.15 degrees, under 20
+		Map<String, DraftFlags> flags = new Fixtures().mappedRoad("r1", "LINESTRING (0 0, 100 0)")
+			.road("d1", "LINESTRING (0 -1, 100 1)")
 			.check(ONLY);
 		checkKinds(flags.get("d1"));
 	}

@@ -76,6 +76,29 @@ class IsolatedPieceCheckTests {
 	}
 
 	@Test
+	void doesNotJoinRoadsThatOnlyCross() {
+		// d12 crosses d13 and r2 in the middle, with no vertex there: 100 m alone
+		Map<String, DraftFlags> flags = new Fixtures().mappedRoad("r2", "LINESTRING (50 450, 50 550)")
+			.road("d12", "LINESTRING (0 500, 100 500)")
+			.road("d13", "LINESTRING (30 480, 30 520)")
+			.check(ONLY);
+		assertThat(only(flags, "d12", FlagKind.ISOLATED_PIECE).value("drafts")).isEqualTo(1);
+	}
+
+	@Test
+	void joinsRoadsThatShareAVertex() {
+		// d14 and d15 cross at their common vertex (50, 600), and d15 shares (70, 600)
+		// with
+		// r3 in the middle of both: joined to a mapped road
+		Map<String, DraftFlags> flags = new Fixtures().mappedRoad("r3", "LINESTRING (70 550, 70 600, 70 650)")
+			.road("d14", "LINESTRING (50 580, 50 600, 50 620)")
+			.road("d15", "LINESTRING (0 600, 50 600, 70 600, 100 600)")
+			.check(ONLY);
+		checkKinds(flags.get("d14"));
+		checkKinds(flags.get("d15"));
+	}
+
+	@Test
 	void leavesBuildingsOut() {
 		Map<String, DraftFlags> flags = new Fixtures().building("b1", "POLYGON ((0 0, 10 0, 10 10, 0 10, 0 0))")
 			.check(ONLY);
