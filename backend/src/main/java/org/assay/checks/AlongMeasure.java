@@ -45,8 +45,14 @@ final class AlongMeasure {
 			for (int i = d.partStart(p) + 1; i < d.partEnd(p); i++) {
 				double px = d.x[i - 1], py = d.y[i - 1], qx = d.x[i], qy = d.y[i];
 				double length = Math.hypot(qx - px, qy - py);
+				double minX = Math.min(px, qx) - buffer, maxX = Math.max(px, qx) + buffer;
+				double minY = Math.min(py, qy) - buffer, maxY = Math.max(py, qy) + buffer;
 				int n = 0;
 				for (int s = 0; s < near.size; s++) {
+					if (Math.max(near.ax[s], near.bx[s]) < minX || Math.min(near.ax[s], near.bx[s]) > maxX
+							|| Math.max(near.ay[s], near.by[s]) < minY || Math.min(near.ay[s], near.by[s]) > maxY) {
+						continue;
+					}
 					if (Planar.withinInterval(px, py, qx, qy, near.ax[s], near.ay[s], near.bx[s], near.by[s], buffer,
 							t)) {
 						if (n == starts.length) {
@@ -56,6 +62,10 @@ final class AlongMeasure {
 						starts[n] = t[0];
 						ends[n++] = t[1];
 					}
+				}
+				if (n == 0) {
+					at += length;
+					continue;
 				}
 				double[][] merged = merge(starts, ends, n);
 				for (int k = 0; k < merged[0].length; k++) {
@@ -78,29 +88,33 @@ final class AlongMeasure {
 		return new AlongMeasure(covered, at, leave);
 	}
 
-	/** Merges intervals: {starts, ends} sorted and disjoint. */
+	/**
+	 * Merges intervals: {starts, ends} sorted and disjoint. Insertion sort: n is small.
+	 */
 	private static double[][] merge(double[] starts, double[] ends, int n) {
-		if (n == 0) {
-			return new double[][] { {}, {} };
+		for (int i = 1; i < n; i++) {
+			double s = starts[i], e = ends[i];
+			int j = i - 1;
+			while (j >= 0 && starts[j] > s) {
+				starts[j + 1] = starts[j];
+				ends[j + 1] = ends[j];
+				j--;
+			}
+			starts[j + 1] = s;
+			ends[j + 1] = e;
 		}
-		Integer[] order = new Integer[n];
-		for (int i = 0; i < n; i++) {
-			order[i] = i;
-		}
-		Arrays.sort(order, (a, b) -> Double.compare(starts[a], starts[b]));
-		double[] s = new double[n], e = new double[n];
+		double[] ms = new double[n], me = new double[n];
 		int m = 0;
-		for (int k = 0; k < n; k++) {
-			int i = order[k];
-			if (m > 0 && starts[i] <= e[m - 1]) {
-				e[m - 1] = Math.max(e[m - 1], ends[i]);
+		for (int i = 0; i < n; i++) {
+			if (m > 0 && starts[i] <= me[m - 1]) {
+				me[m - 1] = Math.max(me[m - 1], ends[i]);
 			}
 			else {
-				s[m] = starts[i];
-				e[m++] = ends[i];
+				ms[m] = starts[i];
+				me[m++] = ends[i];
 			}
 		}
-		return new double[][] { Arrays.copyOf(s, m), Arrays.copyOf(e, m) };
+		return new double[][] { Arrays.copyOf(ms, m), Arrays.copyOf(me, m) };
 	}
 
 	/** The frame point at a distance from the draft's start, {x, y}. */

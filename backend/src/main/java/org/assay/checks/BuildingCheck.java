@@ -46,7 +46,7 @@ final class BuildingCheck implements DraftCheck {
 	}
 
 	@Override
-	public void check(LocalDraft d, List<Flag> flags) {
+	public void check(LocalDraft d, Neighbourhood near, List<Flag> flags) {
 		if (d.feature.isRoad() || d.feature.polygonal == null) {
 			return;
 		}

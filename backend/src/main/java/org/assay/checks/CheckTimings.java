@@ -12,7 +12,8 @@ import java.util.Map;
  * {@code connect} (the isolated-piece check's union-find), {@code checks} (the per-draft
  * checks on all cores) and {@code emit} (scores, handing out results)
  * @param checkNanos nanoseconds spent in each per-draft check, summed over threads, with
- * {@code frame} for drawing each draft in its frame
+ * {@code frame} for drawing each draft in its frame and {@code neighbourhood} for
+ * gathering the segments around it from the indexes, once for all checks
  */
 public record CheckTimings(long drafts, long referenceFeatures, Map<String, Long> phaseNanos,
 		Map<String, Long> checkNanos) {

@@ -28,14 +28,8 @@ final class CrossingCheck implements DraftCheck {
 
 	private final CrossingSettings settings;
 
-	private final ReferenceIndex reference;
-
-	private final DraftIndex drafts;
-
-	CrossingCheck(CrossingSettings settings, ReferenceIndex reference, DraftIndex drafts) {
+	CrossingCheck(CrossingSettings settings) {
 		this.settings = settings;
-		this.reference = reference;
-		this.drafts = drafts;
 	}
 
 	@Override
@@ -44,26 +38,22 @@ final class CrossingCheck implements DraftCheck {
 	}
 
 	@Override
-	public void check(LocalDraft d, List<Flag> flags) {
+	public void check(LocalDraft d, Neighbourhood around, List<Flag> flags) {
 		if (!d.feature.isRoad()) {
 			return;
 		}
-		double[] box = d.searchBox(0.01);
-		NearbySegments near = NearbySegments.gather(this.drafts.roads, d, box);
-		near.addFrom(this.reference.roads, d, box);
-		if (near.size == 0) {
-			return;
-		}
 		Set<PackedFeature> crossed = new HashSet<>();
-		for (int p = 0; p < d.parts(); p++) {
-			for (int i = d.partStart(p) + 1; i < d.partEnd(p); i++) {
-				for (int s = 0; s < near.size; s++) {
-					if (!crossed.contains(near.owner[s]) && Planar.crossProperly(d.x[i - 1], d.y[i - 1], d.x[i], d.y[i],
-							near.ax[s], near.ay[s], near.bx[s], near.by[s])) {
-						Flag flag = unjoined(d, p, i, near, s);
-						if (flag != null) {
-							crossed.add(near.owner[s]);
-							flags.add(flag);
+		for (NearbySegments near : new NearbySegments[] { around.drafts(), around.mapped() }) {
+			for (int p = 0; p < d.parts(); p++) {
+				for (int i = d.partStart(p) + 1; i < d.partEnd(p); i++) {
+					for (int s = 0; s < near.size; s++) {
+						if (!crossed.contains(near.owner[s]) && Planar.crossProperly(d.x[i - 1], d.y[i - 1], d.x[i],
+								d.y[i], near.ax[s], near.ay[s], near.bx[s], near.by[s])) {
+							Flag flag = unjoined(d, p, i, near, s);
+							if (flag != null) {
+								crossed.add(near.owner[s]);
+								flags.add(flag);
+							}
 						}
 					}
 				}

@@ -11,7 +11,12 @@ interface DraftCheck {
 	/** A short name for timings. */
 	String name();
 
-	/** Adds the flags this check finds on a draft. */
-	void check(LocalDraft draft, List<Flag> flags);
+	/**
+	 * Adds the flags this check finds on a draft.
+	 * @param draft the draft in its frame
+	 * @param near the segments around it, within the largest reach of the checks
+	 * @param flags where to add flags
+	 */
+	void check(LocalDraft draft, Neighbourhood near, List<Flag> flags);
 
 }

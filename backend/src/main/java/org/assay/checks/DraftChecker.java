@@ -10,6 +10,7 @@ import java.util.Map;
 import java.util.concurrent.ForkJoinPool;
 import java.util.concurrent.atomic.LongAdder;
 import java.util.function.Consumer;
+import java.util.function.Function;
 import java.util.stream.IntStream;
 
 /**
@@ -64,19 +65,19 @@ public final class DraftChecker {
 	 */
 	public static List<DraftFlags> check(Collection<CheckedDraft> drafts, Collection<MappedFeature> reference) {
 		List<DraftFlags> out = new ArrayList<>();
-		new DraftChecker(CheckSettings.DEFAULTS).run(drafts.iterator(), reference, out::add);
+		new DraftChecker(CheckSettings.DEFAULTS).run(drafts.iterator(), reference.iterator(), out::add);
 		return out;
 	}
 
 	/**
 	 * Checks drafts.
 	 * @param drafts the drafts of a batch, read once; ids should be unique
-	 * @param reference the reference layer
+	 * @param reference the reference layer, read once
 	 * @param sink receives each draft's flags, in the order of the drafts, on the calling
 	 * thread
 	 * @return where the time went
 	 */
-	public CheckTimings run(Iterator<CheckedDraft> drafts, Collection<MappedFeature> reference,
+	public CheckTimings run(Iterator<CheckedDraft> drafts, Iterator<MappedFeature> reference,
 			Consumer<DraftFlags> sink) {
 		Map<String, Long> phases = new LinkedHashMap<>();
 		long start = System.nanoTime();
@@ -90,15 +91,19 @@ public final class DraftChecker {
 		try {
 			List<DraftCheck> checks = checks(referenceIndex, draftIndex, pool);
 			start = lap(phases, "connect", start);
+			double reach = reach();
 			Map<String, LongAdder> spent = new LinkedHashMap<>();
 			spent.put("frame", new LongAdder());
+			spent.put("neighbourhood", new LongAdder());
 			checks.forEach((check) -> spent.put(check.name(), new LongAdder()));
 			List<PackedFeature> all = draftIndex.drafts;
 			@SuppressWarnings("unchecked")
 			List<Flag>[] found = new List[all.size()];
 			pool.submit(() -> IntStream.range(0, all.size())
 				.parallel()
-				.forEach((i) -> found[i] = checkOne(all.get(i), checks, spent))).join();
+				.forEach((i) -> found[i] = checkOne(all.get(i), checks, spent,
+						(d) -> Neighbourhood.gather(referenceIndex, draftIndex, d, reach))))
+				.join();
 			start = lap(phases, "checks", start);
 			for (int i = 0; i < found.length; i++) {
 				List<Flag> flags = (found[i] != null) ? found[i] : List.of();
@@ -110,7 +115,7 @@ public final class DraftChecker {
 			lap(phases, "emit", start);
 			Map<String, Long> checkNanos = new LinkedHashMap<>();
 			spent.forEach((name, nanos) -> checkNanos.put(name, nanos.sum()));
-			return new CheckTimings(all.size(), reference.size(), Collections.unmodifiableMap(phases),
+			return new CheckTimings(all.size(), referenceIndex.size(), Collections.unmodifiableMap(phases),
 					Collections.unmodifiableMap(checkNanos));
 		}
 		finally {
@@ -121,13 +126,13 @@ public final class DraftChecker {
 	private List<DraftCheck> checks(ReferenceIndex reference, DraftIndex drafts, ForkJoinPool pool) {
 		List<DraftCheck> checks = new ArrayList<>();
 		if (this.settings.mapped().enabled()) {
-			checks.add(new MappedAlreadyCheck(this.settings.mapped(), reference));
+			checks.add(new MappedAlreadyCheck(this.settings.mapped()));
 		}
 		if (this.settings.nearMiss().enabled()) {
-			checks.add(new NearMissCheck(this.settings.nearMiss(), reference, drafts));
+			checks.add(new NearMissCheck(this.settings.nearMiss()));
 		}
 		if (this.settings.crossing().enabled()) {
-			checks.add(new CrossingCheck(this.settings.crossing(), reference, drafts));
+			checks.add(new CrossingCheck(this.settings.crossing()));
 		}
 		if (this.settings.isolation().enabled()) {
 			IsolatedPieceCheck isolation = new IsolatedPieceCheck(this.settings.isolation(), reference, drafts);
@@ -143,17 +148,36 @@ public final class DraftChecker {
 		return checks;
 	}
 
-	private static List<Flag> checkOne(PackedFeature draft, List<DraftCheck> checks, Map<String, LongAdder> spent) {
+	/**
+	 * The largest distance from a draft at which the checks that are on look for things.
+	 */
+	private double reach() {
+		double reach = 0.01;
+		if (this.settings.mapped().enabled()) {
+			reach = Math.max(reach, new MappedAlreadyCheck(this.settings.mapped()).reach());
+		}
+		if (this.settings.nearMiss().enabled()) {
+			reach = Math.max(reach, new NearMissCheck(this.settings.nearMiss()).reach());
+		}
+		return reach;
+	}
+
+	private static List<Flag> checkOne(PackedFeature draft, List<DraftCheck> checks, Map<String, LongAdder> spent,
+			Function<LocalDraft, Neighbourhood> gather) {
 		long t0 = System.nanoTime();
 		LocalDraft local = new LocalDraft(draft);
 		long t1 = System.nanoTime();
 		spent.get("frame").add(t1 - t0);
+		Neighbourhood near = gather.apply(local);
+		long t2 = System.nanoTime();
+		spent.get("neighbourhood").add(t2 - t1);
+		t1 = t2;
 		List<Flag> flags = new ArrayList<>(0);
 		for (DraftCheck check : checks) {
-			check.check(local, flags);
-			long t2 = System.nanoTime();
-			spent.get(check.name()).add(t2 - t1);
-			t1 = t2;
+			check.check(local, near, flags);
+			long t3 = System.nanoTime();
+			spent.get(check.name()).add(t3 - t1);
+			t1 = t3;
 		}
 		return flags.isEmpty() ? null : List.copyOf(flags);
 	}

@@ -20,7 +20,7 @@ final class DraftIndex {
 
 	private final STRtree buildings = new STRtree();
 
-	private int buildingCount;
+	private TreeWalk buildingWalk;
 
 	/** Packs and adds a draft; its number is its position in the batch. */
 	void add(CheckedDraft draft) {
@@ -32,15 +32,12 @@ final class DraftIndex {
 		}
 		else {
 			this.buildings.insert(new Envelope(packed.minLon, packed.maxLon, packed.minLat, packed.maxLat), packed);
-			this.buildingCount++;
 		}
 	}
 
 	void build() {
 		this.roads.build();
-		if (this.buildingCount > 0) {
-			this.buildings.build();
-		}
+		this.buildingWalk = TreeWalk.of(this.buildings);
 	}
 
 	/**
@@ -48,10 +45,7 @@ final class DraftIndex {
 	 * maxLat}.
 	 */
 	void buildingsNear(double[] box, Consumer<PackedFeature> visitor) {
-		if (this.buildingCount > 0) {
-			this.buildings.query(new Envelope(box[0], box[2], box[1], box[3]),
-					(item) -> visitor.accept((PackedFeature) item));
-		}
+		this.buildingWalk.query(box[0], box[1], box[2], box[3], visitor);
 	}
 
 }

@@ -185,7 +185,7 @@ final class IsolatedPieceCheck implements DraftCheck {
 	}
 
 	@Override
-	public void check(LocalDraft draft, List<Flag> flags) {
+	public void check(LocalDraft draft, Neighbourhood near, List<Flag> flags) {
 		int root = this.parent[draft.feature.number];
 		if (draft.feature.isRoad() && this.isolated[root]) {
 			flags.add(Flag.of(FlagKind.ISOLATED_PIECE)

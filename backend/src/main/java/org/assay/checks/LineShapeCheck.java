@@ -37,7 +37,7 @@ final class LineShapeCheck implements DraftCheck {
 	}
 
 	@Override
-	public void check(LocalDraft d, List<Flag> flags) {
+	public void check(LocalDraft d, Neighbourhood near, List<Flag> flags) {
 		if (!d.feature.isRoad()) {
 			return;
 		}

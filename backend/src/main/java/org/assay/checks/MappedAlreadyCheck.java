@@ -25,17 +25,20 @@ import java.util.List;
  * Reported lengths and the Hausdorff distance are measured again with GeographicLib:
  * {@code lengthMetres} is the geodesic length, {@code alongMetres} is that times the
  * share, {@code hausdorffMetres} the geodesic distance between the witness vertex and its
- * nearest point. A draft with no mapped feature within reach costs one index query.
+ * nearest point. A draft with no mapped feature within reach costs nothing here: the
+ * {@link Neighbourhood} is gathered once for all checks.
  */
 final class MappedAlreadyCheck implements DraftCheck {
 
 	private final MappedSettings settings;
 
-	private final ReferenceIndex reference;
-
-	MappedAlreadyCheck(MappedSettings settings, ReferenceIndex reference) {
+	MappedAlreadyCheck(MappedSettings settings) {
 		this.settings = settings;
-		this.reference = reference;
+	}
+
+	/** How far from the draft mapped features matter. */
+	double reach() {
+		return Math.max(this.settings.bufferMetres(), this.settings.maxHausdorffMetres());
 	}
 
 	@Override
@@ -44,10 +47,8 @@ final class MappedAlreadyCheck implements DraftCheck {
 	}
 
 	@Override
-	public void check(LocalDraft draft, List<Flag> flags) {
-		SegmentIndex index = draft.feature.isRoad() ? this.reference.roads : this.reference.buildings;
-		double reach = Math.max(this.settings.bufferMetres(), this.settings.maxHausdorffMetres());
-		NearbySegments near = NearbySegments.gather(index, draft, draft.searchBox(reach));
+	public void check(LocalDraft draft, Neighbourhood around, List<Flag> flags) {
+		NearbySegments near = around.mapped();
 		if (near.size == 0) {
 			return;
 		}
@@ -60,14 +61,14 @@ final class MappedAlreadyCheck implements DraftCheck {
 		if (!hausdorff.withinLimit()) {
 			hausdorff = DirectedHausdorff.measure(draft, near, Double.POSITIVE_INFINITY);
 		}
-		double length = Geodesics.length(draft.feature);
 		int middle = draft.x.length / 2;
 		Flag.Builder flag = Flag.of(duplicate ? FlagKind.MAPPED_ALREADY : FlagKind.EXTENDS_MAPPED)
 			.value("share", along.share())
 			.value("hausdorffMetres", hausdorff.geodesic(draft, near))
-			.value("lengthMetres", length)
-			.value("alongMetres", along.share() * length)
 			.other(near.owner[near.nearest(draft.x[middle], draft.y[middle])].id);
+		if (!duplicate) {
+			flag.value("alongMetres", along.share() * Geodesics.length(draft.feature));
+		}
 		if (!duplicate && !Double.isNaN(along.leaveAt)) {
 			double[] p = AlongMeasure.pointAt(draft, along.leaveAt);
 			flag.at(draft.frame.lon(p[0]), draft.frame.lat(p[1]));

@@ -8,13 +8,15 @@ import java.util.List;
  * touches that road nowhere: the model stopped short of a junction.
  *
  * <p>
- * For each end of each part of the draft (a closed part has no end), the road segments
- * within {@code maxGapMetres} of the end are found through the indexes with a box around
- * the end, not around the draft, and measured in the draft's frame. The nearest decides:
- * an end closer than {@code minGapMetres} to any road touches it and is no miss (the scan
- * stops there); an end farther than {@code maxGapMetres} from all is free. For a miss,
- * the draft's segments near the other road are measured against it, stopping at the first
- * pair that touches. Parts of the same draft are not "another road".
+ * For each end of each part of the draft (a closed part has no end), the road segments of
+ * the draft's {@link Neighbourhood} whose boxes come within {@code maxGapMetres} of the
+ * end are measured in the draft's frame; the nearest decides. An end closer than
+ * {@code minGapMetres} to any road touches it and is no miss (the scan stops there); an
+ * end farther than {@code maxGapMetres} from all is free. For a miss, the draft's
+ * segments are measured against the other road's, stopping at the first pair that
+ * touches. Parts of the same draft are not "another road". The neighbourhood is gathered
+ * once per draft from the indexes (PERFORMANCE-NOTES.md: one query per end per index was
+ * the slow, obvious way).
  *
  * <p>
  * One {@link FlagKind#NEAR_MISS} per end: {@code gapMetres} (geodesic, GeographicLib),
@@ -24,14 +26,8 @@ final class NearMissCheck implements DraftCheck {
 
 	private final NearMissSettings settings;
 
-	private final ReferenceIndex reference;
-
-	private final DraftIndex drafts;
-
-	NearMissCheck(NearMissSettings settings, ReferenceIndex reference, DraftIndex drafts) {
+	NearMissCheck(NearMissSettings settings) {
 		this.settings = settings;
-		this.reference = reference;
-		this.drafts = drafts;
 	}
 
 	@Override
@@ -39,8 +35,13 @@ final class NearMissCheck implements DraftCheck {
 		return "near-miss";
 	}
 
+	/** How far from the draft other roads matter. */
+	double reach() {
+		return this.settings.maxGapMetres();
+	}
+
 	@Override
-	public void check(LocalDraft draft, List<Flag> flags) {
+	public void check(LocalDraft draft, Neighbourhood near, List<Flag> flags) {
 		if (!draft.feature.isRoad()) {
 			return;
 		}
@@ -50,34 +51,20 @@ final class NearMissCheck implements DraftCheck {
 			if (last == first || (draft.x[first] == draft.x[last] && draft.y[first] == draft.y[last])) {
 				continue;
 			}
-			end(draft, first, flags);
-			end(draft, last, flags);
+			end(draft, first, near, flags);
+			end(draft, last, near, flags);
 		}
 	}
 
-	private void end(LocalDraft draft, int vertex, List<Flag> flags) {
-		double lon = draft.feature.lon(vertex), lat = draft.feature.lat(vertex);
-		double dLon = draft.frame.degreesLon(this.settings.maxGapMetres());
-		double dLat = MetricFrame.degreesLat(this.settings.maxGapMetres());
-		double[] box = { lon - dLon, lat - dLat, lon + dLon, lat + dLat };
-		NearbySegments near = NearbySegments.gather(this.drafts.roads, draft, box);
-		near.addFrom(this.reference.roads, draft, box);
+	private void end(LocalDraft draft, int vertex, Neighbourhood around, List<Flag> flags) {
 		double px = draft.x[vertex], py = draft.y[vertex];
-		double minSq = this.settings.minGapMetres() * this.settings.minGapMetres();
-		double bestSq = Double.POSITIVE_INFINITY;
-		int best = -1;
-		for (int s = 0; s < near.size; s++) {
-			double d = Planar.pointSegmentDistanceSq(px, py, near.ax[s], near.ay[s], near.bx[s], near.by[s]);
-			if (d < minSq) {
-				return;
-			}
-			if (d < bestSq) {
-				bestSq = d;
-				best = s;
-			}
+		Nearest nearest = new Nearest(px, py, this.settings.maxGapMetres(), this.settings.minGapMetres());
+		if (!nearest.scan(around.drafts()) || !nearest.scan(around.mapped()) || nearest.segments == null) {
+			return;
 		}
-		double max = this.settings.maxGapMetres();
-		if (best < 0 || bestSq > max * max || touches(draft, near.owner[best])) {
+		NearbySegments near = nearest.segments;
+		int best = nearest.segment;
+		if (touches(draft, near.owner[best], around)) {
 			return;
 		}
 		double t = Planar.closestFraction(px, py, near.ax[best], near.ay[best], near.bx[best], near.by[best]);
@@ -91,20 +78,19 @@ final class NearMissCheck implements DraftCheck {
 	}
 
 	/** Whether the draft comes within the smallest gap of a road anywhere. */
-	private boolean touches(LocalDraft draft, PackedFeature other) {
-		double[] box = draft.searchBox(this.settings.minGapMetres());
-		NearbySegments near = NearbySegments.gather(isDraft(other) ? this.drafts.roads : this.reference.roads, draft,
-				box);
+	private boolean touches(LocalDraft draft, PackedFeature other, Neighbourhood around) {
 		double minSq = this.settings.minGapMetres() * this.settings.minGapMetres();
-		for (int s = 0; s < near.size; s++) {
-			if (near.owner[s] != other) {
-				continue;
-			}
-			for (int p = 0; p < draft.parts(); p++) {
-				for (int i = draft.partStart(p) + 1; i < draft.partEnd(p); i++) {
-					if (Planar.segmentDistanceSq(draft.x[i - 1], draft.y[i - 1], draft.x[i], draft.y[i], near.ax[s],
-							near.ay[s], near.bx[s], near.by[s]) < minSq) {
-						return true;
+		for (NearbySegments near : new NearbySegments[] { around.drafts(), around.mapped() }) {
+			for (int s = 0; s < near.size; s++) {
+				if (near.owner[s] != other) {
+					continue;
+				}
+				for (int p = 0; p < draft.parts(); p++) {
+					for (int i = draft.partStart(p) + 1; i < draft.partEnd(p); i++) {
+						if (Planar.segmentDistanceSq(draft.x[i - 1], draft.y[i - 1], draft.x[i], draft.y[i], near.ax[s],
+								near.ay[s], near.bx[s], near.by[s]) < minSq) {
+							return true;
+						}
 					}
 				}
 			}
@@ -112,9 +98,48 @@ final class NearMissCheck implements DraftCheck {
 		return false;
 	}
 
-	private boolean isDraft(PackedFeature feature) {
-		int n = feature.number;
-		return n < this.drafts.drafts.size() && this.drafts.drafts.get(n) == feature;
+	/** The nearest segment to an end within a reach, over several segment sets. */
+	private static final class Nearest {
+
+		final double px, py, reach, touchSq;
+
+		double bestSq;
+
+		NearbySegments segments;
+
+		int segment = -1;
+
+		Nearest(double px, double py, double reach, double touch) {
+			this.px = px;
+			this.py = py;
+			this.reach = reach;
+			this.touchSq = touch * touch;
+			this.bestSq = reach * reach;
+		}
+
+		/** Scans a set; answers false when the end touches a road (no miss). */
+		boolean scan(NearbySegments near) {
+			for (int s = 0; s < near.size; s++) {
+				if (Math.max(near.ax[s], near.bx[s]) < this.px - this.reach
+						|| Math.min(near.ax[s], near.bx[s]) > this.px + this.reach
+						|| Math.max(near.ay[s], near.by[s]) < this.py - this.reach
+						|| Math.min(near.ay[s], near.by[s]) > this.py + this.reach) {
+					continue;
+				}
+				double d = Planar.pointSegmentDistanceSq(this.px, this.py, near.ax[s], near.ay[s], near.bx[s],
+						near.by[s]);
+				if (d < this.touchSq) {
+					return false;
+				}
+				if (d <= this.bestSq) {
+					this.bestSq = d;
+					this.segments = near;
+					this.segment = s;
+				}
+			}
+			return true;
+		}
+
 	}
 
 }

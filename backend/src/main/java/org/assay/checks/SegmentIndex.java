@@ -2,7 +2,6 @@ package org.assay.checks;
 
 import java.util.function.Consumer;
 
-import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.index.strtree.STRtree;
 
 /**
@@ -13,6 +12,8 @@ import org.locationtech.jts.index.strtree.STRtree;
 final class SegmentIndex {
 
 	private final STRtree tree = new STRtree();
+
+	private TreeWalk walk;
 
 	private int size;
 
@@ -29,11 +30,9 @@ final class SegmentIndex {
 		}
 	}
 
-	/** Finishes the tree; call before querying from several threads. */
+	/** Finishes the tree; call once, before querying. */
 	void build() {
-		if (this.size > 0) {
-			this.tree.build();
-		}
+		this.walk = TreeWalk.of(this.tree);
 	}
 
 	int size() {
@@ -42,10 +41,7 @@ final class SegmentIndex {
 
 	/** Calls back for every chunk whose box meets the given box. */
 	void query(double minLon, double minLat, double maxLon, double maxLat, Consumer<Chunk> visitor) {
-		if (this.size == 0) {
-			return;
-		}
-		this.tree.query(new Envelope(minLon, maxLon, minLat, maxLat), (item) -> visitor.accept((Chunk) item));
+		this.walk.query(minLon, minLat, maxLon, maxLat, visitor);
 	}
 
 }

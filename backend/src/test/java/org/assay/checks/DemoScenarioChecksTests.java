@@ -140,7 +140,7 @@ class DemoScenarioChecksTests {
 		for (double touch : new double[] { 1, 5, 10 }) {
 			CheckSettings only = CheckSettings.NONE.with(new IsolationSettings(true, 200, touch));
 			Map<FaultClass, Integer> row = new EnumMap<>(FaultClass.class);
-			new DraftChecker(only).run(drafts.iterator(), reference, (f) -> {
+			new DraftChecker(only).run(drafts.iterator(), reference.iterator(), (f) -> {
 				if (f.has(FlagKind.ISOLATED_PIECE)) {
 					row.merge(scenario.truth().get(f.id()).faultClass(), 1, Integer::sum);
 				}

@@ -64,7 +64,7 @@ final class Fixtures {
 	/** Runs the checks and answers each draft's flags by id. */
 	Map<String, DraftFlags> check(CheckSettings settings) {
 		Map<String, DraftFlags> out = new LinkedHashMap<>();
-		new DraftChecker(settings).run(this.drafts.iterator(), this.reference, (f) -> out.put(f.id(), f));
+		new DraftChecker(settings).run(this.drafts.iterator(), this.reference.iterator(), (f) -> out.put(f.id(), f));
 		return out;
 	}
 

@@ -24,8 +24,6 @@ class MappedAlreadyCheckTests {
 			.check(ONLY), "d1", FlagKind.MAPPED_ALREADY);
 		assertThat(flag.value("share")).isCloseTo(1, within(1e-9));
 		assertThat(flag.value("hausdorffMetres")).isCloseTo(3, within(1e-3));
-		assertThat(flag.value("lengthMetres")).isCloseTo(160, within(1e-3));
-		assertThat(flag.value("alongMetres")).isCloseTo(160, within(1e-3));
 		assertThat(flag.otherId()).isEqualTo("r1");
 		assertThat(flag.point()).isNull();
 	}
@@ -97,7 +95,6 @@ class MappedAlreadyCheckTests {
 			.check(ONLY), "d1", FlagKind.MAPPED_ALREADY);
 		assertThat(flag.value("share")).isCloseTo(1, within(1e-9));
 		assertThat(flag.value("hausdorffMetres")).isCloseTo(1, within(1e-3));
-		assertThat(flag.value("lengthMetres")).isCloseTo(40, within(1e-3));
 	}
 
 	@Test
