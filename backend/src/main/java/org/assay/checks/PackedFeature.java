@@ -12,9 +12,16 @@ import org.locationtech.jts.geom.Polygon;
 
 /**
  * A feature held for checking: its lines (for polygons, their rings) as one packed array
- * of longitudes and latitudes, 16 bytes a position, and its box. A road keeps no JTS
- * geometry, so a million drafts cost their coordinates and little more; a building keeps
- * its polygons for the overlap tests.
+ * of longitudes and latitudes, and its box. A road keeps no JTS geometry, so a million
+ * drafts cost their coordinates and little more; a building keeps its polygons for the
+ * overlap tests.
+ *
+ * <p>
+ * Positions are held as {@code float} offsets from the box's south-west corner, 8 bytes a
+ * position instead of 16. A float keeps 24 bits, so a position is off by at most
+ * {@code 2^-25} of the box's side: 0.03 mm for a 1 km road, 0.3 mm for a 10 km one; equal
+ * positions of one feature stay equal. All checks allow far more (a centimetre is the
+ * files' own precision).
  */
 final class PackedFeature {
 
@@ -27,8 +34,11 @@ final class PackedFeature {
 
 	final double confidence;
 
-	/** Longitude, latitude, longitude, latitude... of all parts one after the other. */
-	final double[] coords;
+	/**
+	 * Offsets of longitude, latitude, longitude, latitude... of all parts, from the box's
+	 * corner.
+	 */
+	private final float[] offsets;
 
 	/** The vertex index just past the end of each part. */
 	final int[] partEnds;
@@ -50,7 +60,6 @@ final class PackedFeature {
 		this.id = id;
 		this.kind = kind;
 		this.confidence = confidence;
-		this.coords = coords;
 		this.partEnds = partEnds;
 		this.polygonal = polygonal;
 		double x0 = Double.POSITIVE_INFINITY, y0 = Double.POSITIVE_INFINITY;
@@ -65,6 +74,11 @@ final class PackedFeature {
 		this.minLat = y0;
 		this.maxLon = x1;
 		this.maxLat = y1;
+		this.offsets = new float[coords.length];
+		for (int i = 0; i < coords.length; i += 2) {
+			this.offsets[i] = (float) (coords[i] - x0);
+			this.offsets[i + 1] = (float) (coords[i + 1] - y0);
+		}
 	}
 
 	/**
@@ -119,15 +133,15 @@ final class PackedFeature {
 	}
 
 	int vertexCount() {
-		return this.coords.length / 2;
+		return this.offsets.length / 2;
 	}
 
 	double lon(int vertex) {
-		return this.coords[2 * vertex];
+		return this.minLon + this.offsets[2 * vertex];
 	}
 
 	double lat(int vertex) {
-		return this.coords[2 * vertex + 1];
+		return this.minLat + this.offsets[2 * vertex + 1];
 	}
 
 	boolean isRoad() {

@@ -22,8 +22,12 @@ final class SegmentIndex {
 		for (int p = 0; p < feature.partEnds.length; p++) {
 			int start = feature.partStart(p);
 			int last = feature.partEnds[p] - 1;
-			for (int from = start; from < last; from += Chunk.MAX_SEGMENTS) {
-				Chunk chunk = new Chunk(feature, from, Math.min(last, from + Chunk.MAX_SEGMENTS));
+			// chunks of equal size: 40 segments make two of 20, not one of 32 and one of
+			// 8
+			int chunks = (last - start + Chunk.MAX_SEGMENTS - 1) / Chunk.MAX_SEGMENTS;
+			int size = (last - start + chunks - 1) / chunks;
+			for (int from = start; from < last; from += size) {
+				Chunk chunk = new Chunk(feature, from, Math.min(last, from + size));
 				this.tree.insert(chunk, chunk);
 				this.size++;
 			}
