@@ -18,19 +18,26 @@ import java.util.stream.IntStream;
  * layer, on all cores, and hands out each draft's flags and risk.
  *
  * <p>
- * The reference layer is held in memory, indexed ({@link ReferenceIndex}). The drafts are
- * read once from an iterator and kept packed (16 bytes a position plus about 150 bytes a
- * draft, no JTS geometry for roads; {@link DraftIndex}), because the checks compare
- * drafts with their neighbours; results go to a consumer draft by draft, in the order
- * read, and only drafts with flags hold a list while the checks run. So memory is the
- * packed drafts, their index and the reference, whatever the input's encoding. Checks run
- * in a {@link ForkJoinPool} of the given parallelism (default: all cores).
+ * The reference layer is read once from an iterator and held packed and indexed
+ * ({@link ReferenceIndex}). The drafts are read once from an iterator and kept packed (8
+ * bytes a position plus about 300 bytes a draft with its index entry, no JTS geometry for
+ * roads; {@link DraftIndex}), because the checks compare drafts with their neighbours.
+ * The checks then run on blocks of {@value #BLOCK} drafts in a {@link ForkJoinPool} of
+ * the given parallelism (default: all cores), and each block's results go to the
+ * consumer, draft by draft in the order read, before the next block starts. So memory is
+ * the packed drafts, their index, the packed reference and one block's flags, whatever
+ * the input's encoding.
  *
  * <pre>
  * List&lt;DraftFlags&gt; flags = DraftChecker.check(drafts, reference);
  * </pre>
  */
 public final class DraftChecker {
+
+	/**
+	 * Drafts checked before their results are handed out: bounds the flags held at once.
+	 */
+	private static final int BLOCK = 1 << 14;
 
 	private final CheckSettings settings;
 
@@ -97,22 +104,25 @@ public final class DraftChecker {
 			spent.put("neighbourhood", new LongAdder());
 			checks.forEach((check) -> spent.put(check.name(), new LongAdder()));
 			List<PackedFeature> all = draftIndex.drafts;
-			@SuppressWarnings("unchecked")
-			List<Flag>[] found = new List[all.size()];
-			pool.submit(() -> IntStream.range(0, all.size())
-				.parallel()
-				.forEach((i) -> found[i] = checkOne(all.get(i), checks, spent,
-						(d) -> Neighbourhood.gather(referenceIndex, draftIndex, d, reach))))
-				.join();
-			start = lap(phases, "checks", start);
-			for (int i = 0; i < found.length; i++) {
-				List<Flag> flags = (found[i] != null) ? found[i] : List.of();
-				PackedFeature draft = all.get(i);
-				sink.accept(
-						new DraftFlags(draft.id, draft.confidence, flags, RiskScore.draft(draft.confidence, flags)));
-				found[i] = null;
+			long checking = 0;
+			long emitting = 0;
+			for (int from = 0; from < all.size(); from += BLOCK) {
+				int to = Math.min(all.size(), from + BLOCK);
+				List<Flag>[] found = checkBlock(all, from, to, checks, spent, pool,
+						(d) -> Neighbourhood.gather(referenceIndex, draftIndex, d, reach));
+				long emit = System.nanoTime();
+				checking += emit - start;
+				for (int i = from; i < to; i++) {
+					List<Flag> flags = (found[i - from] != null) ? found[i - from] : List.of();
+					PackedFeature draft = all.get(i);
+					sink.accept(new DraftFlags(draft.id, draft.confidence, flags,
+							RiskScore.draft(draft.confidence, flags)));
+				}
+				start = System.nanoTime();
+				emitting += start - emit;
 			}
-			lap(phases, "emit", start);
+			phases.put("checks", checking);
+			phases.put("emit", emitting);
 			Map<String, Long> checkNanos = new LinkedHashMap<>();
 			spent.forEach((name, nanos) -> checkNanos.put(name, nanos.sum()));
 			return new CheckTimings(all.size(), referenceIndex.size(), Collections.unmodifiableMap(phases),
@@ -160,6 +170,16 @@ public final class DraftChecker {
 			reach = Math.max(reach, new NearMissCheck(this.settings.nearMiss()).reach());
 		}
 		return reach;
+	}
+
+	@SuppressWarnings("unchecked")
+	private static List<Flag>[] checkBlock(List<PackedFeature> all, int from, int to, List<DraftCheck> checks,
+			Map<String, LongAdder> spent, ForkJoinPool pool, Function<LocalDraft, Neighbourhood> gather) {
+		List<Flag>[] found = new List[to - from];
+		pool.submit(() -> IntStream.range(from, to)
+			.parallel()
+			.forEach((i) -> found[i - from] = checkOne(all.get(i), checks, spent, gather))).join();
+		return found;
 	}
 
 	private static List<Flag> checkOne(PackedFeature draft, List<DraftCheck> checks, Map<String, LongAdder> spent,

@@ -1,7 +1,7 @@
 package org.assay.checks;
 
 import java.io.IOException;
-import java.io.InputStream;
+import java.io.UncheckedIOException;
 import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryMXBean;
 import java.nio.file.Files;
@@ -10,6 +10,7 @@ import java.util.Iterator;
 import java.util.Map;
 import java.util.NoSuchElementException;
 import java.util.concurrent.atomic.AtomicLong;
+import java.util.function.Function;
 
 import org.assay.geo.GeoJsonFeatureReader;
 import org.assay.geo.ParsedFeature;
@@ -80,21 +81,20 @@ public final class ChecksBenchmark {
 		HeapSampler heap = HeapSampler.start();
 		long start = System.nanoTime();
 		long cpu = OS.getProcessCpuTime();
-		try (Features reference = Features.reference(referenceFile); Features parsed = Features.drafts(draftFile)) {
-			ReferenceIndex referenceIndex = new ReferenceIndex(reference.mapped());
-			DraftIndex draftIndex = new DraftIndex();
-			parsed.drafts().forEachRemaining(draftIndex::add);
-			draftIndex.build();
-			double seconds = (System.nanoTime() - start) / 1e9;
-			double cpuSeconds = (OS.getProcessCpuTime() - cpu) / 1e9;
-			long peak = heap.finish();
-			System.gc();
-			long live = MEMORY.getHeapMemoryUsage().getUsed();
-			System.out.printf(
-					"floor (parse + index, no checks): %.2f s, %,.0f drafts/s; peak heap %,d MB; "
-							+ "live heap with both indexes %,d MB (%d + %d features)%n",
-					seconds, drafts / seconds, peak >> 20, live >> 20, referenceIndex.size(), draftIndex.drafts.size());
-		}
+		ReferenceIndex referenceIndex = new ReferenceIndex(Reading.mapped(referenceFile));
+		DraftIndex draftIndex = new DraftIndex();
+		Reading.drafts(draftFile).forEachRemaining(draftIndex::add);
+		draftIndex.build();
+		double seconds = (System.nanoTime() - start) / 1e9;
+		double cpuSeconds = (OS.getProcessCpuTime() - cpu) / 1e9;
+		long peak = heap.finish();
+		System.gc();
+		long live = MEMORY.getHeapMemoryUsage().getUsed();
+		System.out.printf(
+				"floor (parse + index, no checks): %.2f s, %,.0f drafts/s; cpu %.2f s; peak heap %,d MB; "
+						+ "live heap with both indexes %,d MB (%d + %d features)%n",
+				seconds, drafts / seconds, cpuSeconds, peak >> 20, live >> 20, referenceIndex.size(),
+				draftIndex.drafts.size());
 	}
 
 	private static void full(Path referenceFile, Path draftFile, int drafts) throws IOException {
@@ -105,12 +105,11 @@ public final class ChecksBenchmark {
 		long start = System.nanoTime();
 		long cpu = OS.getProcessCpuTime();
 		CheckTimings timings;
-		try (Features reference = Features.reference(referenceFile); Features parsed = Features.drafts(draftFile)) {
-			timings = new DraftChecker(CheckSettings.DEFAULTS).run(parsed.drafts(), reference.mapped(), (f) -> {
-				flagged.addAndGet(f.flags().isEmpty() ? 0 : 1);
-				flags.addAndGet(f.flags().size());
-			});
-		}
+		timings = new DraftChecker(CheckSettings.DEFAULTS).run(Reading.drafts(draftFile), Reading.mapped(referenceFile),
+				(f) -> {
+					flagged.addAndGet(f.flags().isEmpty() ? 0 : 1);
+					flags.addAndGet(f.flags().size());
+				});
 		double seconds = (System.nanoTime() - start) / 1e9;
 		double cpuSeconds = (OS.getProcessCpuTime() - cpu) / 1e9;
 		long peak = heap.finish();
@@ -126,45 +125,45 @@ public final class ChecksBenchmark {
 		}
 	}
 
-	/** A GeoJSON file read feature by feature. */
-	private record Features(GeoJsonFeatureReader reader) implements AutoCloseable {
-
-		static Features reference(Path file) throws IOException {
-			return new Features(GeoJsonFeatureReader.open(Files.newInputStream(file), ReaderOptions.reference()));
-		}
-
-		static Features drafts(Path file) throws IOException {
-			InputStream in = Files.newInputStream(file);
-			return new Features(GeoJsonFeatureReader.open(in, ReaderOptions.drafts()));
-		}
-
-		Iterator<CheckedDraft> drafts() {
-			return new Reading<>(this.reader, (f) -> new CheckedDraft(f.id(), f.kind(), f.geometry(), f.confidence()));
-		}
-
-		Iterator<MappedFeature> mapped() {
-			return new Reading<>(this.reader, (f) -> new MappedFeature(f.id(), f.kind(), f.geometry()));
-		}
-
-		@Override
-		public void close() throws IOException {
-			this.reader.close();
-		}
-
-	}
-
+	/**
+	 * A GeoJSON file read feature by feature; the reader (with its set of ids seen, for
+	 * finding duplicates) is closed and let go at the end, as the upload job does.
+	 */
 	private static final class Reading<T> implements Iterator<T> {
 
-		private final GeoJsonFeatureReader reader;
+		private GeoJsonFeatureReader reader;
 
-		private final java.util.function.Function<ParsedFeature, T> map;
+		private final Function<ParsedFeature, T> map;
 
 		private ParsedFeature next;
 
-		Reading(GeoJsonFeatureReader reader, java.util.function.Function<ParsedFeature, T> map) {
+		private Reading(GeoJsonFeatureReader reader, Function<ParsedFeature, T> map) {
 			this.reader = reader;
 			this.map = map;
-			this.next = reader.next();
+			advance();
+		}
+
+		static Iterator<CheckedDraft> drafts(Path file) throws IOException {
+			return new Reading<>(GeoJsonFeatureReader.open(Files.newInputStream(file), ReaderOptions.drafts()),
+					(f) -> new CheckedDraft(f.id(), f.kind(), f.geometry(), f.confidence()));
+		}
+
+		static Iterator<MappedFeature> mapped(Path file) throws IOException {
+			return new Reading<>(GeoJsonFeatureReader.open(Files.newInputStream(file), ReaderOptions.reference()),
+					(f) -> new MappedFeature(f.id(), f.kind(), f.geometry()));
+		}
+
+		private void advance() {
+			this.next = this.reader.next();
+			if (this.next == null) {
+				try {
+					this.reader.close();
+				}
+				catch (IOException ex) {
+					throw new UncheckedIOException(ex);
+				}
+				this.reader = null;
+			}
 		}
 
 		@Override
@@ -178,7 +177,7 @@ public final class ChecksBenchmark {
 				throw new NoSuchElementException();
 			}
 			T item = this.map.apply(this.next);
-			this.next = this.reader.next();
+			advance();
 			return item;
 		}
 
