@@ -23,16 +23,16 @@ final class Table {
 	}
 
 	Row add(String name, UploadBenchmark.Timed timed) {
-		return add(new Row(name, timed.nanos(), timed.heap(), ""));
+		return add(new Row(name, timed.nanos(), timed.usage(), ""));
 	}
 
 	Row add(String name, UploadRun.Result upload) {
-		return add(new Row(name, upload.nanos(), upload.heap(), String.format("%s; %,d drafts stored in %,d cells",
+		return add(new Row(name, upload.nanos(), upload.usage(), String.format("%s; %,d drafts stored in %,d cells",
 				upload.stages(), upload.storedDrafts(), upload.cells())));
 	}
 
 	Row add(String name, CopyFloor.Result copy) {
-		return add(new Row(name, copy.nanos(), copy.heap(),
+		return add(new Row(name, copy.nanos(), copy.usage(),
 				String.format("%,d rows, %,.0f MB of COPY data", copy.rows(), copy.bytes() / MB)));
 	}
 
@@ -48,16 +48,17 @@ final class Table {
 	private String line(Row row) {
 		double seconds = row.nanos() / 1e9;
 		return String.format("%7.2f s %,11.0f drafts/s %7.1f MB/s | %s", seconds, this.drafts / seconds,
-				this.bytes / MB / seconds, row.heap());
+				this.bytes / MB / seconds, row.usage());
 	}
 
 	/**
 	 * Prints the table and the ratios. The floor of parsing is the faster of its two
 	 * passes; rows that were not measured are {@code null}.
 	 */
-	void print(Row parseBefore, Row parseAfter, Row h2, Row postgres, Row copy) {
-		System.out.printf("%nResults: %,d drafts, %,.0f MB of GeoJSON (MB = 10^6 bytes; heap in MiB)%n", this.drafts,
-				this.bytes / MB);
+	void print(Row parseBefore, Row parseAfter, Row h2, Row postgres, Row copy, Row keyed) {
+		System.out.printf(
+				"%nResults: %,d drafts, %,.0f MB of GeoJSON (MB = 10^6 bytes; cpu = process CPU time; heap in MiB)%n",
+				this.drafts, this.bytes / MB);
 		for (Row row : this.rows) {
 			System.out.printf("  %-46s %s%n", row.name(), line(row));
 		}
@@ -70,6 +71,8 @@ final class Table {
 			System.out.printf("  PostgreSQL upload / (parse + COPY)        %5.2f%n",
 					(double) postgres.nanos() / (parse + copy.nanos()));
 			System.out.printf("  PostgreSQL upload / parse                 %5.2f%n", (double) postgres.nanos() / parse);
+			System.out.printf("  (reference) PostgreSQL upload / (parse + COPY into a table with draft's keys) %5.2f%n",
+					(double) postgres.nanos() / (parse + keyed.nanos()));
 		}
 	}
 
@@ -78,10 +81,10 @@ final class Table {
 	 *
 	 * @param name what was measured
 	 * @param nanos its time
-	 * @param heap the heap during it
+	 * @param usage the CPU time and heap during it
 	 * @param note details
 	 */
-	record Row(String name, long nanos, HeapWatch.Heap heap, String note) {
+	record Row(String name, long nanos, StepWatch.Usage usage, String note) {
 	}
 
 }

@@ -15,6 +15,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.stream.Stream;
 
+import com.sun.management.HotSpotDiagnosticMXBean;
 import org.assay.geo.GeneratedDrafts;
 import org.assay.geo.GeoJsonFeatureReader;
 import org.assay.geo.ParsedFeature;
@@ -34,9 +35,10 @@ import org.assay.support.PostgresDatabase;
  * does nothing else; timed before and after the uploads, the faster counts.</li>
  * <li>Uploads it through the upload service on H2 (a file database in the temporary
  * folder), then on PostgreSQL (a fresh database on the server the tests use, dropped at
- * the end): time from submit to done, each stage, the heap.</li>
+ * the end): time from submit to done, each stage, the CPU time and the heap.</li>
  * <li>Floor 2 (PostgreSQL): a binary COPY of the same rows into a fresh table with the
- * draft table's columns, timed alone ({@link CopyFloor}).</li>
+ * draft table's columns, timed alone ({@link CopyFloor}); for reference, the same into a
+ * table with the draft table's indexes and foreign keys.</li>
  * </ol>
  * Prints a table and the ratios upload / floor, where the floor is parsing on H2 and
  * parsing plus COPY on PostgreSQL. A second argument, {@code h2} or {@code postgresql},
@@ -54,6 +56,14 @@ public final class UploadBenchmark {
 				OffsetDateTime.now(ZoneOffset.UTC).format(DateTimeFormatter.ISO_LOCAL_DATE_TIME),
 				System.getProperty("java.vm.version"), ManagementFactory.getRuntimeMXBean().getInputArguments(),
 				Runtime.getRuntime().availableProcessors(), Runtime.getRuntime().maxMemory() >> 20);
+		// page faults are slow on the development machines: say how the heap was guarded
+		HotSpotDiagnosticMXBean hotspot = ManagementFactory.getPlatformMXBean(HotSpotDiagnosticMXBean.class);
+		System.out.printf("heap pages: AlwaysPreTouch=%s, UseTransparentHugePages=%s, Xms=Xmx: %s%n",
+				hotspot.getVMOption("AlwaysPreTouch").getValue(),
+				hotspot.getVMOption("UseTransparentHugePages").getValue(),
+				hotspot.getVMOption("InitialHeapSize")
+					.getValue()
+					.equals(hotspot.getVMOption("MaxHeapSize").getValue()));
 		Path folder = Files.createTempDirectory("assay-bench-");
 		try {
 			run(drafts, !databases.equals("postgresql"), !databases.equals("h2"), folder);
@@ -77,6 +87,7 @@ public final class UploadBenchmark {
 		Table.Row h2 = onH2 ? table.add("upload, H2 file database", h2(file, folder)) : null;
 		Table.Row copy = null;
 		Table.Row postgres = null;
+		Table.Row keyed = null;
 		PostgresDatabase database = onPostgres ? postgres() : null;
 		if (database != null) {
 			try {
@@ -84,16 +95,17 @@ public final class UploadBenchmark {
 				UploadRun.Result upload = UploadRun.upload(database.url(), database.user(), database.password(), file,
 						work);
 				postgres = table.add("upload, PostgreSQL", upload);
-				CopyFloor.Result floor = CopyFloor.measure(database.url(), database.user(), database.password(),
+				List<CopyFloor.Result> floors = CopyFloor.measure(database.url(), database.user(), database.password(),
 						upload.batchId(), work);
-				copy = table.add("floor 2: PostgreSQL binary COPY of the rows", floor);
+				copy = table.add("floor 2: PostgreSQL binary COPY of the rows", floors.get(0));
+				keyed = table.add("(reference) COPY, table with draft's keys", floors.get(1));
 			}
 			finally {
 				database.drop();
 			}
 		}
 		Table.Row parseAfter = table.add("floor 1: parse to JTS (after)", time(() -> parse(file)));
-		table.print(parseBefore, parseAfter, h2, postgres, copy);
+		table.print(parseBefore, parseAfter, h2, postgres, copy, keyed);
 	}
 
 	private static UploadRun.Result h2(Path file, Path folder) throws IOException {
@@ -125,12 +137,12 @@ public final class UploadBenchmark {
 	}
 
 	private static Timed time(Work work) throws IOException {
-		HeapWatch heap = new HeapWatch();
-		heap.start();
+		StepWatch watch = new StepWatch();
+		watch.start();
 		long start = System.nanoTime();
 		work.run();
 		long nanos = System.nanoTime() - start;
-		return new Timed(nanos, heap.stop());
+		return new Timed(nanos, watch.stop());
 	}
 
 	private static void delete(Path folder) throws IOException {
@@ -143,7 +155,7 @@ public final class UploadBenchmark {
 		}
 	}
 
-	record Timed(long nanos, HeapWatch.Heap heap) {
+	record Timed(long nanos, StepWatch.Usage usage) {
 	}
 
 	@FunctionalInterface

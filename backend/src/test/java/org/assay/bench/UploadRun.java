@@ -23,7 +23,7 @@ import org.springframework.jdbc.core.JdbcTemplate;
 /**
  * One upload through {@link UploadService} in an application started without its web
  * server, on the database given by a JDBC URL: the time from submitting to the job's end,
- * the time of each stage, the heap, and the stored batch's size.
+ * the time of each stage, the CPU time and heap, and the stored batch's size.
  */
 final class UploadRun {
 
@@ -56,8 +56,8 @@ final class UploadRun {
 					UploadSettings.DEFAULT_LEASE_MINUTES, UploadSettings.DEFAULT_CATALOGUE);
 			Path link = Files.createLink(work.resolve("upload.geojson"), drafts);
 
-			HeapWatch heap = new HeapWatch();
-			heap.start();
+			StepWatch watch = new StepWatch();
+			watch.start();
 			long start = System.nanoTime();
 			UploadStatus status = uploads.submit(lead, settings, link, null);
 			Map<String, Long> stages = new LinkedHashMap<>();
@@ -75,7 +75,7 @@ final class UploadRun {
 				status = uploads.await(status.id(), POLL);
 			}
 			long nanos = System.nanoTime() - start;
-			HeapWatch.Heap used = heap.stop();
+			StepWatch.Usage used = watch.stop();
 			if (stage != null) {
 				stages.put(stage, System.nanoTime() - stageStart);
 			}
@@ -93,13 +93,13 @@ final class UploadRun {
 	 * What one upload measured.
 	 *
 	 * @param nanos from submitting to the job's end
-	 * @param heap the heap during the upload
+	 * @param usage the CPU time and heap during the upload
 	 * @param stageNanos the time of each stage seen by polling every 50 ms, in order
 	 * @param batchId the stored batch
 	 * @param storedDrafts the drafts stored
 	 * @param cells the cells made
 	 */
-	record Result(long nanos, HeapWatch.Heap heap, Map<String, Long> stageNanos, long batchId, int storedDrafts,
+	record Result(long nanos, StepWatch.Usage usage, Map<String, Long> stageNanos, long batchId, int storedDrafts,
 			int cells) {
 
 		String stages() {

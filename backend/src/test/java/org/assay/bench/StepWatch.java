@@ -6,9 +6,14 @@ import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
 import java.util.List;
 
+import com.sun.management.OperatingSystemMXBean;
+
 /**
- * Watches the heap during one measured step. Two figures, because a collector with room
- * to spare lets garbage pile up in the young generation whatever the step holds:
+ * Watches the resources of one measured step: the CPU time of the whole process (all
+ * threads: the job's, the collector's, the compiler's, H2's; not the PostgreSQL
+ * server's), which a shared machine disturbs less than the wall clock, and the heap. Two
+ * figures of the heap, because a collector with room to spare lets garbage pile up in the
+ * young generation whatever the step holds:
  * <ul>
  * <li>peak: the sum of the heap pools' peaks (each pool's peak is reset at the start), an
  * upper bound of the heap in use at any moment, garbage included;</li>
@@ -17,7 +22,7 @@ import java.util.List;
  * </ul>
  * It also counts the collections and their accumulated time.
  */
-final class HeapWatch {
+final class StepWatch {
 
 	private static final long MB = 1L << 20;
 
@@ -32,6 +37,8 @@ final class HeapWatch {
 
 	private long collectionMillis;
 
+	private long cpuNanos;
+
 	/**
 	 * Collects garbage, then resets the peaks and starts counting.
 	 */
@@ -40,13 +47,14 @@ final class HeapWatch {
 		this.pools.forEach(MemoryPoolMXBean::resetPeakUsage);
 		this.collections = this.collectors.stream().mapToLong(GarbageCollectorMXBean::getCollectionCount).sum();
 		this.collectionMillis = this.collectors.stream().mapToLong(GarbageCollectorMXBean::getCollectionTime).sum();
+		this.cpuNanos = cpuNanos();
 	}
 
 	/**
 	 * Stops counting.
 	 * @return the figures
 	 */
-	Heap stop() {
+	Usage stop() {
 		long peak = 0;
 		long oldPeak = 0;
 		for (MemoryPoolMXBean pool : this.pools) {
@@ -57,23 +65,29 @@ final class HeapWatch {
 		}
 		long count = this.collectors.stream().mapToLong(GarbageCollectorMXBean::getCollectionCount).sum();
 		long millis = this.collectors.stream().mapToLong(GarbageCollectorMXBean::getCollectionTime).sum();
-		return new Heap(peak / MB, oldPeak / MB, count - this.collections, millis - this.collectionMillis);
+		return new Usage(cpuNanos() - this.cpuNanos, peak / MB, oldPeak / MB, count - this.collections,
+				millis - this.collectionMillis);
+	}
+
+	private static long cpuNanos() {
+		return ((OperatingSystemMXBean) ManagementFactory.getOperatingSystemMXBean()).getProcessCpuTime();
 	}
 
 	/**
-	 * Heap figures of one step, in MiB.
+	 * What one step used; heap figures in MiB.
 	 *
+	 * @param cpuNanos CPU time of the process
 	 * @param peakMb sum of the heap pools' peaks
 	 * @param oldPeakMb peak of the old generation
 	 * @param collections number of collections
 	 * @param collectionMillis their accumulated time
 	 */
-	record Heap(long peakMb, long oldPeakMb, long collections, long collectionMillis) {
+	record Usage(long cpuNanos, long peakMb, long oldPeakMb, long collections, long collectionMillis) {
 
 		@Override
 		public String toString() {
-			return String.format("heap peak %,d MiB (old gen %,d), %d GCs %,d ms", this.peakMb, this.oldPeakMb,
-					this.collections, this.collectionMillis);
+			return String.format("cpu %6.1f s | heap peak %,d MiB (old gen %,d), %d GCs %,d ms", this.cpuNanos / 1e9,
+					this.peakMb, this.oldPeakMb, this.collections, this.collectionMillis);
 		}
 
 	}
