@@ -1,11 +1,8 @@
 package org.assay.batches;
 
-import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.sql.PreparedStatement;
 import java.sql.SQLException;
-import java.sql.Types;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
 import java.util.List;
@@ -22,21 +19,15 @@ import org.springframework.jdbc.support.KeyHolder;
 
 /**
  * Pass 2 of an upload: writes the batch, its cells, its drafts and its reference layer
- * with JDBC batches. Runs inside the caller's transaction, so that on any failure nothing
- * of the batch is stored.
+ * (the features in bulk, see {@link FeatureRows}: COPY on PostgreSQL, JDBC batches
+ * elsewhere). Runs inside the caller's transaction, so that on any failure nothing of the
+ * batch is stored.
  */
 final class BatchWriter {
 
-	private static final int BATCH_SIZE = 1000;
-
-	private static final String INSERT_DRAFT = "insert into draft (batch_id, cell_id, seq, source_id, kind, confidence,"
-			+ " feature_class, geom, min_x, min_y, max_x, max_y, length_m, properties)"
-			+ " values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)";
-
-	private static final String INSERT_REFERENCE = "insert into reference_feature (batch_id, seq, source_id, kind, geom,"
-			+ " min_x, min_y, max_x, max_y, properties) values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)";
-
 	private final JdbcTemplate jdbc;
+
+	private volatile FeatureRows rows;
 
 	BatchWriter(JdbcTemplate jdbc) {
 		this.jdbc = jdbc;
@@ -111,82 +102,33 @@ final class BatchWriter {
 		return ids;
 	}
 
+	/**
+	 * Writes the drafts from their spool; see {@link FeatureRows#insertDrafts}.
+	 */
 	void insertDrafts(long batchId, Path spool, int[] cellOfDraft, long[] cellIds, IntConsumer progress) {
-		this.jdbc.execute((java.sql.Connection connection) -> {
-			try (PreparedStatement ps = connection.prepareStatement(INSERT_DRAFT);
-					FeatureSpool.Reader reader = FeatureSpool.reader(spool)) {
-				int index = 0;
-				for (FeatureSpool.Row row = reader.next(); row != null; row = reader.next()) {
-					ps.setLong(1, batchId);
-					ps.setLong(2, cellIds[cellOfDraft[index]]);
-					ps.setInt(3, row.seq());
-					ps.setString(4, row.sourceId());
-					ps.setString(5, row.kind().jsonName());
-					ps.setDouble(6, row.confidence());
-					ps.setString(7, row.featureClass());
-					ps.setBytes(8, row.wkb());
-					setBox(ps, 9, row);
-					ps.setDouble(13, row.lengthMetres());
-					ps.setString(14, row.properties());
-					ps.addBatch();
-					index++;
-					if (index % BATCH_SIZE == 0) {
-						ps.executeBatch();
-						progress.accept(index);
-					}
-				}
-				ps.executeBatch();
-				progress.accept(index);
-				return null;
-			}
-			catch (IOException ex) {
-				throw new UncheckedIOException(ex);
-			}
-		});
+		rows().insertDrafts(batchId, spool, cellOfDraft, cellIds, progress);
 	}
 
+	/**
+	 * Writes the reference features from their spool.
+	 * @return the number written
+	 */
 	int insertReference(long batchId, Path spool) {
-		return this.jdbc.execute((java.sql.Connection connection) -> {
-			try (PreparedStatement ps = connection.prepareStatement(INSERT_REFERENCE);
-					FeatureSpool.Reader reader = FeatureSpool.reader(spool)) {
-				int count = 0;
-				for (FeatureSpool.Row row = reader.next(); row != null; row = reader.next()) {
-					ps.setLong(1, batchId);
-					ps.setInt(2, row.seq());
-					ps.setString(3, row.sourceId());
-					ps.setString(4, row.kind().jsonName());
-					ps.setBytes(5, row.wkb());
-					setBox(ps, 6, row);
-					if (row.properties() != null) {
-						ps.setString(10, row.properties());
-					}
-					else {
-						ps.setNull(10, Types.VARCHAR);
-					}
-					ps.addBatch();
-					count++;
-					if (count % BATCH_SIZE == 0) {
-						ps.executeBatch();
-					}
-				}
-				ps.executeBatch();
-				return count;
-			}
-			catch (IOException ex) {
-				throw new UncheckedIOException(ex);
-			}
-		});
+		return rows().insertReference(batchId, spool);
 	}
 
 	void setReferenceCount(long batchId, int count) {
 		this.jdbc.update("update batch set reference_count = ? where id = ?", count, batchId);
 	}
 
-	private static void setBox(PreparedStatement ps, int first, FeatureSpool.Row row) throws SQLException {
-		ps.setDouble(first, row.minX());
-		ps.setDouble(first + 1, row.minY());
-		ps.setDouble(first + 2, row.maxX());
-		ps.setDouble(first + 3, row.maxY());
+	/** Chosen at the first upload, when the database is surely reachable. */
+	private FeatureRows rows() {
+		FeatureRows chosen = this.rows;
+		if (chosen == null) {
+			chosen = FeatureRows.forDatabase(this.jdbc);
+			this.rows = chosen;
+		}
+		return chosen;
 	}
 
 }

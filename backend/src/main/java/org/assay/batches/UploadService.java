@@ -143,7 +143,8 @@ public class UploadService {
 		try {
 			this.jobs.progress(id, "parsing", 0, 0);
 			SpoolingParse.Result parsed = SpoolingParse.run(drafts, folder.resolve("drafts.spool"),
-					ReaderOptions.drafts(), (count) -> this.jobs.progress(id, "parsing", count, 0));
+					ReaderOptions.drafts(),
+					ThrottledProgress.of((count) -> this.jobs.progress(id, "parsing", count, 0)));
 			Path referenceSpool = null;
 			if (reference != null) {
 				file = "reference";
@@ -159,7 +160,7 @@ public class UploadService {
 				long batch = this.writer.insertBatch(settings, accountId, parsed.count(), cells, 0, parsed.extent());
 				long[] cellIds = this.writer.insertCells(batch, plan);
 				this.writer.insertDrafts(batch, folder.resolve("drafts.spool"), plan.cellOfDraft(), cellIds,
-						(count) -> this.jobs.progress(id, "writing", count, cells));
+						ThrottledProgress.of((count) -> this.jobs.progress(id, "writing", count, cells)));
 				if (referenceRows != null) {
 					this.writer.setReferenceCount(batch, this.writer.insertReference(batch, referenceRows));
 				}

@@ -9,7 +9,8 @@ import org.locationtech.jts.io.WKBWriter;
 
 /**
  * Well-known binary coding of geometries, as stored in {@code bytea} columns. Two
- * dimensions, SRID 4326 on read.
+ * dimensions, big-endian, SRID 4326 on read. Lines and polygons are written by
+ * {@link WkbEncoder}, everything else by JTS; the bytes are the same.
  */
 public final class Wkb {
 
@@ -29,7 +30,8 @@ public final class Wkb {
 	 * @return its WKB bytes
 	 */
 	public static byte[] write(Geometry geometry) {
-		return WRITER.get().write(geometry);
+		byte[] bytes = WkbEncoder.encode(geometry);
+		return (bytes != null) ? bytes : WRITER.get().write(geometry);
 	}
 
 	/**

@@ -13,7 +13,7 @@ import java.util.SplittableRandom;
  * PERFORMANCE-NOTES.md (555 MB and 17.7M coordinates for a million drafts). The same seed
  * gives the same bytes.
  */
-final class GeneratedDrafts extends InputStream {
+public final class GeneratedDrafts extends InputStream {
 
 	private static final byte[] HEADER = bytes(
 			"{\"type\":\"FeatureCollection\",\"name\":\"generated drafts\",\"features\":[\n");
@@ -38,7 +38,12 @@ final class GeneratedDrafts extends InputStream {
 
 	private final Text text = new Text();
 
-	GeneratedDrafts(long count, long seed) {
+	/**
+	 * Makes a collection.
+	 * @param count the number of drafts
+	 * @param seed the seed of the made-up shapes and properties
+	 */
+	public GeneratedDrafts(long count, long seed) {
 		this.count = count;
 		this.random = new SplittableRandom(seed);
 	}

@@ -1,5 +1,9 @@
 package org.assay.geo;
 
+import java.util.SplittableRandom;
+
+import net.sf.geographiclib.Geodesic;
+import net.sf.geographiclib.GeodesicMask;
 import org.junit.jupiter.api.Test;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
@@ -61,6 +65,44 @@ class GeodesicMeasuresTests {
 		// plus one degree of the equator (derivation as above)
 		double perimeter = GeodesicMeasures.lengthMetres(geometry("POLYGON ((0 0, 1 0, 1 90, 0 0))"));
 		assertThat(perimeter).isCloseTo(2 * 10001965.7293 + A * Math.PI / 180, within(1e-3));
+	}
+
+	@Test
+	void shortSegmentsAreWithinAMicrometreOfTheGeodesic() {
+		// reference library: GeographicLib's full solution, segment by segment; random
+		// segments up to the largest short span in both directions, at all latitudes
+		SplittableRandom random = new SplittableRandom(20_130_043);
+		double span = GeodesicMeasures.SHORT_DEGREES;
+		for (int i = 0; i < 200_000; i++) {
+			double lat1 = random.nextDouble(-90 + span, 90 - span);
+			double lon1 = random.nextDouble(-180, 180);
+			double lat2 = lat1 + random.nextDouble(-span, span);
+			double lon2 = lon1 + ((i % 4 == 0) ? span : random.nextDouble(-span, span));
+			double geodesic = Geodesic.WGS84.Inverse(lat1, lon1, lat2, lon2, GeodesicMask.DISTANCE).s12;
+			assertThat(GeodesicMeasures.segment(lat1, lon1, lat2, lon2)).as("%s %s %s %s", lat1, lon1, lat2, lon2)
+				.isCloseTo(geodesic, within(1e-6));
+		}
+	}
+
+	@Test
+	void segmentsJustLongerThanShortTakeTheFullSolution() {
+		// reference library: GeographicLib, which the long path calls; 0.0051 degrees of
+		// latitude is past the short span
+		double geodesic = Geodesic.WGS84.Inverse(60, 10, 60.0051, 10.003, GeodesicMask.DISTANCE).s12;
+		assertThat(GeodesicMeasures.segment(60, 10, 60.0051, 10.003)).isEqualTo(geodesic);
+	}
+
+	@Test
+	void aRoadOfShortSegmentsMeasuresAsTheSumOfItsGeodesics() {
+		// reference library: GeographicLib, segment by segment
+		Geometry road = geometry("LINESTRING (13.4 52.5, 13.4002 52.5001, 13.4005 52.4999, 13.4051 52.5)");
+		double expected = 0;
+		Coordinate[] points = road.getCoordinates();
+		for (int i = 1; i < points.length; i++) {
+			expected += Geodesic.WGS84.Inverse(points[i - 1].y, points[i - 1].x, points[i].y, points[i].x,
+					GeodesicMask.DISTANCE).s12;
+		}
+		assertThat(GeodesicMeasures.lengthMetres(road)).isCloseTo(expected, within(3e-6));
 	}
 
 	@Test
