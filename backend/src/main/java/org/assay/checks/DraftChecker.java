@@ -184,20 +184,15 @@ public final class DraftChecker {
 
 	private static List<Flag> checkOne(PackedFeature draft, List<DraftCheck> checks, Map<String, LongAdder> spent,
 			Function<LocalDraft, Neighbourhood> gather) {
-		long t0 = System.nanoTime();
+		CheckClock clock = CheckClock.forDraft(draft.number);
 		LocalDraft local = new LocalDraft(draft);
-		long t1 = System.nanoTime();
-		spent.get("frame").add(t1 - t0);
+		clock.lap(spent, "frame");
 		Neighbourhood near = gather.apply(local);
-		long t2 = System.nanoTime();
-		spent.get("neighbourhood").add(t2 - t1);
-		t1 = t2;
+		clock.lap(spent, "neighbourhood");
 		List<Flag> flags = new ArrayList<>(0);
 		for (DraftCheck check : checks) {
 			check.check(local, near, flags);
-			long t3 = System.nanoTime();
-			spent.get(check.name()).add(t3 - t1);
-			t1 = t3;
+			clock.lap(spent, check.name());
 		}
 		return flags.isEmpty() ? null : List.copyOf(flags);
 	}

@@ -18,7 +18,7 @@ final class DraftIndex {
 
 	final SegmentIndex roads = new SegmentIndex();
 
-	private final STRtree buildings = new STRtree();
+	private STRtree buildings = new STRtree();
 
 	private TreeWalk buildingWalk;
 
@@ -38,6 +38,7 @@ final class DraftIndex {
 	void build() {
 		this.roads.build();
 		this.buildingWalk = TreeWalk.of(this.buildings);
+		this.buildings = null;
 	}
 
 	/**

@@ -11,18 +11,18 @@ final class NearbySegments {
 
 	int size;
 
-	double[] ax = new double[32];
+	double[] ax = new double[128];
 
-	double[] ay = new double[32];
+	double[] ay = new double[128];
 
-	double[] bx = new double[32];
+	double[] bx = new double[128];
 
-	double[] by = new double[32];
+	double[] by = new double[128];
 
-	PackedFeature[] owner = new PackedFeature[32];
+	PackedFeature[] owner = new PackedFeature[128];
 
 	/** The owner's vertex at the start of each segment. */
-	int[] vertex = new int[32];
+	int[] vertex = new int[128];
 
 	/**
 	 * Gathers segments of an index within a box, leaving out the draft itself.
@@ -41,13 +41,21 @@ final class NearbySegments {
 			if (f == draft.feature) {
 				return;
 			}
+			// each vertex drawn once; a segment is kept when its own box meets the query
+			// box
+			double lon0 = f.lon(chunk.from), lat0 = f.lat(chunk.from);
+			double x0 = frame.x(lon0), y0 = frame.y(lat0);
 			for (int i = chunk.from; i < chunk.to; i++) {
-				double lon0 = f.lon(i), lat0 = f.lat(i), lon1 = f.lon(i + 1), lat1 = f.lat(i + 1);
-				if (Math.max(lon0, lon1) < box[0] || Math.min(lon0, lon1) > box[2] || Math.max(lat0, lat1) < box[1]
-						|| Math.min(lat0, lat1) > box[3]) {
-					continue;
+				double lon1 = f.lon(i + 1), lat1 = f.lat(i + 1);
+				double x1 = frame.x(lon1), y1 = frame.y(lat1);
+				if (Math.max(lon0, lon1) >= box[0] && Math.min(lon0, lon1) <= box[2] && Math.max(lat0, lat1) >= box[1]
+						&& Math.min(lat0, lat1) <= box[3]) {
+					add(x0, y0, x1, y1, f, i);
 				}
-				add(frame.x(lon0), frame.y(lat0), frame.x(lon1), frame.y(lat1), f, i);
+				lon0 = lon1;
+				lat0 = lat1;
+				x0 = x1;
+				y0 = y1;
 			}
 		});
 	}

@@ -11,7 +11,7 @@ import org.locationtech.jts.index.strtree.STRtree;
  */
 final class SegmentIndex {
 
-	private final STRtree tree = new STRtree();
+	private STRtree tree = new STRtree();
 
 	private TreeWalk walk;
 
@@ -37,6 +37,8 @@ final class SegmentIndex {
 	/** Finishes the tree; call once, before querying. */
 	void build() {
 		this.walk = TreeWalk.of(this.tree);
+		// the flat copy answers all queries; the tree's objects can go
+		this.tree = null;
 	}
 
 	int size() {

@@ -22,7 +22,7 @@ import java.util.SplittableRandom;
  */
 final class BenchmarkRoads {
 
-	private static final double LON0 = 5, LAT0 = 45, SIDE = 3;
+	private static final double LON0 = 5, LAT0 = 45;
 
 	private static final double M_LAT = 111_132, M_LON = 111_320 * Math.cos(Math.toRadians(46.5));
 
@@ -30,9 +30,19 @@ final class BenchmarkRoads {
 
 	private final int referenceCount;
 
-	BenchmarkRoads(long seed, int referenceCount) {
+	private final double side;
+
+	/**
+	 * A generator.
+	 * @param seed the seed
+	 * @param referenceCount how many mapped roads
+	 * @param side the square's side in degrees (3 for the benchmark; smaller keeps the
+	 * density of a smaller run)
+	 */
+	BenchmarkRoads(long seed, int referenceCount, double side) {
 		this.seed = seed;
 		this.referenceCount = referenceCount;
+		this.side = side;
 	}
 
 	void writeReference(Path file) throws IOException {
@@ -91,15 +101,15 @@ final class BenchmarkRoads {
 					road[2 * v + 1] + off * Math.sin(heading) / M_LAT };
 			return walk(start, 12 + random.nextInt(12), heading, random);
 		}
-		return wander(random);
+		return wander(random, this.side);
 	}
 
 	private double[] reference(int i) {
-		return wander(new SplittableRandom(this.seed * 17 + 7_919L * (i + 1)));
+		return wander(new SplittableRandom(this.seed * 17 + 7_919L * (i + 1)), this.side);
 	}
 
-	private static double[] wander(SplittableRandom random) {
-		double[] start = { LON0 + SIDE * random.nextDouble(), LAT0 + SIDE * random.nextDouble() };
+	private static double[] wander(SplittableRandom random, double side) {
+		double[] start = { LON0 + side * random.nextDouble(), LAT0 + side * random.nextDouble() };
 		return walk(start, 12 + random.nextInt(12), random.nextDouble() * 2 * Math.PI, random);
 	}
 

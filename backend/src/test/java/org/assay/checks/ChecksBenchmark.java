@@ -29,7 +29,8 @@ import org.assay.geo.ReaderOptions;
  * Prints drafts per second, the phases, the time share of each check, and the peak heap
  * in use (sampled every 5 ms, garbage included) and the live heap after a full GC once
  * the indexes are built. From the repository root, with optional draft and reference
- * counts:
+ * counts and the side of the square in degrees (by default 3° for a million drafts, and
+ * the same density for fewer):
  *
  * <pre>
  * ./mvnw -B -q -o -pl backend -am test-compile dependency:build-classpath \
@@ -58,16 +59,18 @@ public final class ChecksBenchmark {
 	public static void main(String[] args) throws IOException {
 		int drafts = (args.length > 0) ? Integer.parseInt(args[0]) : 1_000_000;
 		int roads = (args.length > 1) ? Integer.parseInt(args[1]) : 300_000;
+		// the same density as the full run unless a side is given
+		double side = (args.length > 2) ? Double.parseDouble(args[2]) : 3 * Math.sqrt(drafts / 1e6);
 		System.out.println("JVM options: " + ManagementFactory.getRuntimeMXBean().getInputArguments() + ", "
 				+ Runtime.getRuntime().availableProcessors() + " processors");
 		Path referenceFile = Files.createTempFile("assay-reference-", ".geojson");
 		Path draftFile = Files.createTempFile("assay-drafts-", ".geojson");
 		try {
-			BenchmarkRoads world = new BenchmarkRoads(42, roads);
+			BenchmarkRoads world = new BenchmarkRoads(42, roads, side);
 			world.writeReference(referenceFile);
 			world.writeDrafts(draftFile, drafts);
-			System.out.printf("generated %,d reference roads (%,d bytes) and %,d drafts (%,d bytes)%n", roads,
-					Files.size(referenceFile), drafts, Files.size(draftFile));
+			System.out.printf("generated %,d reference roads (%,d bytes) and %,d drafts (%,d bytes) in %.2f° x %.2f°%n",
+					roads, Files.size(referenceFile), drafts, Files.size(draftFile), side, side);
 			floor(referenceFile, draftFile, drafts);
 			full(referenceFile, draftFile, drafts);
 		}
@@ -120,7 +123,7 @@ public final class ChecksBenchmark {
 		System.out.printf("  per-draft checks alone: %,.0f drafts/s%n", drafts / (checksWall / 1e9));
 		long total = timings.checkNanos().values().stream().mapToLong(Long::longValue).sum();
 		for (Map.Entry<String, Long> check : timings.checkNanos().entrySet()) {
-			System.out.printf("  check %-18s %5.1f%% of check time (%6.2f thread-s)%n", check.getKey(),
+			System.out.printf("  check %-18s %5.1f%% of check CPU time (%6.2f cpu-s)%n", check.getKey(),
 					100.0 * check.getValue() / total, check.getValue() / 1e9);
 		}
 	}
