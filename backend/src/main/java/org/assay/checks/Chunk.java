@@ -1,22 +1,19 @@
 package org.assay.checks;
 
-import org.locationtech.jts.geom.Envelope;
-
 /**
  * A run of consecutive segments of one part of a feature, the item of a
- * {@link SegmentIndex}: segments {@code from → from+1 … to−1 → to}. It is its own
- * envelope (longitude, latitude), which saves the tree an object per item.
+ * {@link SegmentIndex}: segments {@code from → from+1 … to−1 → to}. Its box lives in the
+ * index's flat arrays ({@link TreeWalk}), not here.
  */
-final class Chunk extends Envelope {
-
-	private static final long serialVersionUID = 1L;
+final class Chunk {
 
 	/**
-	 * The most segments in one chunk: small boxes for long lines, few items for short.
+	 * The most segments in one chunk: small boxes for long lines, one item for a drafted
+	 * road of 15 to 30 segments (each item costs the index about 70 bytes).
 	 */
-	static final int MAX_SEGMENTS = 16;
+	static final int MAX_SEGMENTS = 32;
 
-	final transient PackedFeature feature;
+	final PackedFeature feature;
 
 	final int from;
 
@@ -26,9 +23,6 @@ final class Chunk extends Envelope {
 		this.feature = feature;
 		this.from = from;
 		this.to = to;
-		for (int i = from; i <= to; i++) {
-			expandToInclude(feature.lon(i), feature.lat(i));
-		}
 	}
 
 }

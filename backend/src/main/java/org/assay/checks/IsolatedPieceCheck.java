@@ -26,6 +26,8 @@ import java.util.stream.IntStream;
  */
 final class IsolatedPieceCheck implements DraftCheck {
 
+	private static final ThreadLocal<NearbySegments> SCRATCH = ThreadLocal.withInitial(NearbySegments::new);
+
 	private final IsolationSettings settings;
 
 	private final ReferenceIndex reference;

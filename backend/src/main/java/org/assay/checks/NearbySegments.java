@@ -34,6 +34,16 @@ final class NearbySegments {
 		return segments;
 	}
 
+	/**
+	 * Gathers into this set, emptied first: a thread reuses its sets from draft to draft
+	 * rather than allocating and zeroing some kilobytes for each.
+	 */
+	NearbySegments refill(SegmentIndex index, LocalDraft draft, double[] box) {
+		this.size = 0;
+		addFrom(index, draft, box);
+		return this;
+	}
+
 	void addFrom(SegmentIndex index, LocalDraft draft, double[] box) {
 		MetricFrame frame = draft.frame;
 		index.query(box[0], box[1], box[2], box[3], (chunk) -> {
@@ -41,21 +51,28 @@ final class NearbySegments {
 			if (f == draft.feature) {
 				return;
 			}
-			// each vertex drawn once; a segment is kept when its own box meets the query
-			// box
+			// a segment is kept when its own box meets the query box; each kept vertex is
+			// drawn once, and only kept ones are drawn
 			double lon0 = f.lon(chunk.from), lat0 = f.lat(chunk.from);
-			double x0 = frame.x(lon0), y0 = frame.y(lat0);
+			double x0 = 0, y0 = 0;
+			boolean drawn = false;
 			for (int i = chunk.from; i < chunk.to; i++) {
 				double lon1 = f.lon(i + 1), lat1 = f.lat(i + 1);
-				double x1 = frame.x(lon1), y1 = frame.y(lat1);
-				if (Math.max(lon0, lon1) >= box[0] && Math.min(lon0, lon1) <= box[2] && Math.max(lat0, lat1) >= box[1]
-						&& Math.min(lat0, lat1) <= box[3]) {
+				boolean keep = Math.max(lon0, lon1) >= box[0] && Math.min(lon0, lon1) <= box[2]
+						&& Math.max(lat0, lat1) >= box[1] && Math.min(lat0, lat1) <= box[3];
+				if (keep) {
+					if (!drawn) {
+						x0 = frame.x(lon0);
+						y0 = frame.y(lat0);
+					}
+					double x1 = frame.x(lon1), y1 = frame.y(lat1);
 					add(x0, y0, x1, y1, f, i);
+					x0 = x1;
+					y0 = y1;
 				}
+				drawn = keep;
 				lon0 = lon1;
 				lat0 = lat1;
-				x0 = x1;
-				y0 = y1;
 			}
 		});
 	}

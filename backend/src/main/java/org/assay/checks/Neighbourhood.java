@@ -13,13 +13,21 @@ package org.assay.checks;
  */
 record Neighbourhood(NearbySegments mapped, NearbySegments drafts) {
 
+	private static final ThreadLocal<NearbySegments[]> SETS = ThreadLocal
+		.withInitial(() -> new NearbySegments[] { new NearbySegments(), new NearbySegments() });
+
+	/**
+	 * Gathers the neighbourhood of a draft into the calling thread's two sets, which the
+	 * next call on the same thread empties: use it before gathering for the next draft.
+	 */
 	static Neighbourhood gather(ReferenceIndex reference, DraftIndex drafts, LocalDraft draft, double reach) {
 		double[] box = draft.searchBox(reach);
+		NearbySegments[] sets = SETS.get();
 		if (!draft.feature.isRoad()) {
-			return new Neighbourhood(NearbySegments.gather(reference.buildings, draft, box), new NearbySegments());
+			sets[1].size = 0;
+			return new Neighbourhood(sets[0].refill(reference.buildings, draft, box), sets[1]);
 		}
-		return new Neighbourhood(NearbySegments.gather(reference.roads, draft, box),
-				NearbySegments.gather(drafts.roads, draft, box));
+		return new Neighbourhood(sets[0].refill(reference.roads, draft, box), sets[1].refill(drafts.roads, draft, box));
 	}
 
 }

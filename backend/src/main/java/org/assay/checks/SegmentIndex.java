@@ -2,6 +2,8 @@ package org.assay.checks;
 
 import java.util.function.Consumer;
 
+import org.locationtech.jts.geom.Envelope;
+
 import org.locationtech.jts.index.strtree.STRtree;
 
 /**
@@ -28,7 +30,11 @@ final class SegmentIndex {
 			int size = (last - start + chunks - 1) / chunks;
 			for (int from = start; from < last; from += size) {
 				Chunk chunk = new Chunk(feature, from, Math.min(last, from + size));
-				this.tree.insert(chunk, chunk);
+				Envelope box = new Envelope();
+				for (int i = chunk.from; i <= chunk.to; i++) {
+					box.expandToInclude(feature.lon(i), feature.lat(i));
+				}
+				this.tree.insert(box, chunk);
 				this.size++;
 			}
 		}
