@@ -10,6 +10,8 @@ import java.util.UUID;
 
 import org.assay.accounts.Account;
 import org.assay.accounts.AccountService;
+import org.assay.checks.CheckSettings;
+import tools.jackson.databind.ObjectMapper;
 
 import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
@@ -40,7 +42,11 @@ class BatchController {
 
 	private final UploadProperties properties;
 
-	BatchController(AccountService accounts, BatchService batches, UploadService uploads, UploadProperties properties) {
+	private final CheckSettingsJson checkSettings;
+
+	BatchController(AccountService accounts, BatchService batches, UploadService uploads, UploadProperties properties,
+			ObjectMapper json) {
+		this.checkSettings = new CheckSettingsJson(json);
 		this.accounts = accounts;
 		this.batches = batches;
 		this.uploads = uploads;
@@ -74,11 +80,24 @@ class BatchController {
 			@RequestParam(name = "maxRoadKmPerCell", defaultValue = "15") double maxRoadKmPerCell,
 			@RequestParam(name = "leaseMinutes", defaultValue = "30") int leaseMinutes,
 			@RequestParam(name = "reasonCatalogue", defaultValue = UploadSettings.DEFAULT_CATALOGUE) String catalogue,
+			@RequestParam(name = "checks", required = false) String checks,
+			@RequestParam(name = "queueOrder", defaultValue = "risk") String queueOrder,
+			@RequestParam(name = "queueSeed", required = false) Long queueSeed,
 			@RequestParam(name = "wait", defaultValue = "false") boolean wait) throws IOException {
 		Account account = this.accounts.current();
 		String batchName = (name == null || name.isBlank()) ? drafts.getOriginalFilename() : name.strip();
+		CheckSettings checkSettings;
+		QueueOrder order;
+		try {
+			checkSettings = this.checkSettings.read(checks);
+			order = QueueOrder.of(queueOrder);
+		}
+		catch (IllegalArgumentException ex) {
+			throw new ResponseStatusException(HttpStatus.BAD_REQUEST, ex.getMessage());
+		}
 		UploadSettings settings = new UploadSettings(batchName, modelName.strip(), modelVersion.strip(),
-				blankToNull(imageryUrl), maxDraftsPerCell, maxRoadKmPerCell, leaseMinutes, catalogue);
+				blankToNull(imageryUrl), maxDraftsPerCell, maxRoadKmPerCell, leaseMinutes, catalogue, checkSettings,
+				order, (queueSeed != null) ? queueSeed : System.nanoTime());
 		SettingsCheck.check(settings);
 		Files.createDirectories(this.properties.spoolDir());
 		Path draftsFile = receive(drafts);

@@ -5,11 +5,14 @@ import java.sql.PreparedStatement;
 import java.sql.SQLException;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.function.IntConsumer;
 
 import org.assay.cells.CellBox;
 import org.assay.cells.CellPlan;
+import org.assay.checks.FlagKind;
 import org.locationtech.jts.geom.Envelope;
 
 import org.springframework.jdbc.core.BatchPreparedStatementSetter;
@@ -34,13 +37,15 @@ final class BatchWriter {
 	}
 
 	long insertBatch(UploadSettings settings, long createdBy, int draftCount, int cellCount, int referenceCount,
-			Envelope extent) {
+			Envelope extent, String checkSettings) {
 		KeyHolder keys = new GeneratedKeyHolder();
 		this.jdbc.update((connection) -> {
-			PreparedStatement ps = connection.prepareStatement("insert into batch (name, model_name, model_version,"
-					+ " imagery_url, reason_catalogue, state, created_by, created_at, max_drafts_per_cell,"
-					+ " max_road_km_per_cell, lease_minutes, draft_count, cell_count, reference_count,"
-					+ " min_x, min_y, max_x, max_y) values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)",
+			PreparedStatement ps = connection.prepareStatement(
+					"insert into batch (name, model_name, model_version,"
+							+ " imagery_url, reason_catalogue, state, created_by, created_at, max_drafts_per_cell,"
+							+ " max_road_km_per_cell, lease_minutes, draft_count, cell_count, reference_count,"
+							+ " min_x, min_y, max_x, max_y, check_settings, queue_order, queue_seed)"
+							+ " values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)",
 					new String[] { "id" });
 			ps.setString(1, settings.name());
 			ps.setString(2, settings.modelName());
@@ -60,6 +65,9 @@ final class BatchWriter {
 			ps.setDouble(16, extent.getMinY());
 			ps.setDouble(17, extent.getMaxX());
 			ps.setDouble(18, extent.getMaxY());
+			ps.setString(19, checkSettings);
+			ps.setString(20, settings.queueOrder().apiName());
+			ps.setLong(21, settings.queueSeed());
 			return ps;
 		}, keys);
 		return keys.getKeyAs(Number.class).longValue();
@@ -69,11 +77,11 @@ final class BatchWriter {
 	 * Inserts the cells of a plan.
 	 * @return the cell ids, by index in the plan
 	 */
-	long[] insertCells(long batchId, CellPlan plan) {
+	long[] insertCells(long batchId, CellPlan plan, double[] risk, int[] rank) {
 		List<CellBox> cells = plan.cells();
 		this.jdbc.batchUpdate("insert into cell (batch_id, seq, min_x, min_y, max_x, max_y, draft_count,"
-				+ " road_length_m, over_limit, decided_count, version) values (?, ?, ?, ?, ?, ?, ?, ?, ?, 0, 0)",
-				new BatchPreparedStatementSetter() {
+				+ " road_length_m, over_limit, decided_count, version, risk, queue_rank)"
+				+ " values (?, ?, ?, ?, ?, ?, ?, ?, ?, 0, 0, ?, ?)", new BatchPreparedStatementSetter() {
 
 					@Override
 					public void setValues(PreparedStatement ps, int i) throws SQLException {
@@ -87,6 +95,8 @@ final class BatchWriter {
 						ps.setInt(7, cell.draftCount());
 						ps.setDouble(8, cell.roadMetres());
 						ps.setBoolean(9, cell.overLimit());
+						ps.setDouble(10, risk[i]);
+						ps.setInt(11, rank[i]);
 					}
 
 					@Override
@@ -105,8 +115,18 @@ final class BatchWriter {
 	/**
 	 * Writes the drafts from their spool; see {@link FeatureRows#insertDrafts}.
 	 */
-	void insertDrafts(long batchId, Path spool, int[] cellOfDraft, long[] cellIds, IntConsumer progress) {
-		rows().insertDrafts(batchId, spool, cellOfDraft, cellIds, progress);
+	void insertDrafts(long batchId, Path spool, int[] cellOfDraft, long[] cellIds, UploadChecks checks,
+			IntConsumer progress) {
+		rows().insertDrafts(batchId, spool, cellOfDraft, cellIds, checks, progress);
+	}
+
+	/**
+	 * Writes how many drafts carry each kind of flag.
+	 */
+	void insertFlagCounts(long batchId, Map<FlagKind, Integer> counts) {
+		List<Object[]> rows = new ArrayList<>();
+		counts.forEach((kind, drafts) -> rows.add(new Object[] { batchId, kind.code(), drafts }));
+		this.jdbc.batchUpdate("insert into batch_flag_count (batch_id, code, drafts) values (?, ?, ?)", rows);
 	}
 
 	/**

@@ -16,7 +16,9 @@ import org.locationtech.jts.geom.Geometry;
  * @param featureClass the optional class
  * @param geometry the drafted geometry
  * @param propertiesJson the uploaded properties, verbatim
+ * @param risk the risk score the checks gave it, 0 to 1
+ * @param flagsJson what the checks found, as a JSON array of flags, or {@code null}
  */
 public record Draft(long id, long batchId, long cellId, int seq, String sourceId, FeatureKind kind, double confidence,
-		String featureClass, Geometry geometry, String propertiesJson) {
+		String featureClass, Geometry geometry, String propertiesJson, double risk, String flagsJson) {
 }

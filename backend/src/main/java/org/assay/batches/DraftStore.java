@@ -18,7 +18,7 @@ import org.springframework.stereotype.Service;
 public class DraftStore {
 
 	private static final String DRAFT = "select id, batch_id, cell_id, seq, source_id, kind, confidence, feature_class,"
-			+ " geom, properties from draft";
+			+ " geom, properties, risk, flags from draft";
 
 	private final JdbcTemplate jdbc;
 
@@ -73,7 +73,7 @@ public class DraftStore {
 	private static Draft draft(ResultSet rs, int row) throws SQLException {
 		return new Draft(rs.getLong(1), rs.getLong(2), rs.getLong(3), rs.getInt(4), rs.getString(5),
 				FeatureKind.fromJson(rs.getString(6)), rs.getDouble(7), rs.getString(8), Wkb.read(rs.getBytes(9)),
-				rs.getString(10));
+				rs.getString(10), rs.getDouble(11), rs.getString(12));
 	}
 
 }

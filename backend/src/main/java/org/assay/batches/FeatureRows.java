@@ -15,7 +15,7 @@ interface FeatureRows {
 
 	/** The draft columns both ways write, in order. */
 	String DRAFT_COLUMNS = "batch_id, cell_id, seq, source_id, kind, confidence, feature_class, geom,"
-			+ " min_x, min_y, max_x, max_y, length_m, properties";
+			+ " min_x, min_y, max_x, max_y, length_m, properties, risk, flags";
 
 	/** The reference feature columns both ways write, in order. */
 	String REFERENCE_COLUMNS = "batch_id, seq, source_id, kind, geom, min_x, min_y, max_x, max_y, properties";
@@ -29,9 +29,11 @@ interface FeatureRows {
 	 * @param spool the drafts' spool, in file order
 	 * @param cellOfDraft for each draft the index of its cell
 	 * @param cellIds the cell ids by index
+	 * @param checks each draft's risk and flags, by index
 	 * @param progress told the number of drafts written, now and then and at the end
 	 */
-	void insertDrafts(long batchId, Path spool, int[] cellOfDraft, long[] cellIds, IntConsumer progress);
+	void insertDrafts(long batchId, Path spool, int[] cellOfDraft, long[] cellIds, UploadChecks checks,
+			IntConsumer progress);
 
 	/**
 	 * Writes the reference features of a batch.

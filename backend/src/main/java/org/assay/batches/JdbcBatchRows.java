@@ -20,7 +20,7 @@ final class JdbcBatchRows implements FeatureRows {
 	private static final int BATCH_SIZE = 1000;
 
 	private static final String INSERT_DRAFT = "insert into draft (" + DRAFT_COLUMNS + ")"
-			+ " values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)";
+			+ " values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)";
 
 	private static final String INSERT_REFERENCE = "insert into reference_feature (" + REFERENCE_COLUMNS + ")"
 			+ " values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)";
@@ -32,7 +32,8 @@ final class JdbcBatchRows implements FeatureRows {
 	}
 
 	@Override
-	public void insertDrafts(long batchId, Path spool, int[] cellOfDraft, long[] cellIds, IntConsumer progress) {
+	public void insertDrafts(long batchId, Path spool, int[] cellOfDraft, long[] cellIds, UploadChecks checks,
+			IntConsumer progress) {
 		this.jdbc.execute((Connection connection) -> {
 			try (PreparedStatement ps = connection.prepareStatement(INSERT_DRAFT);
 					FeatureSpool.Reader reader = FeatureSpool.reader(spool)) {
@@ -49,6 +50,8 @@ final class JdbcBatchRows implements FeatureRows {
 					setBox(ps, 9, row);
 					ps.setDouble(13, row.lengthMetres());
 					ps.setString(14, row.properties());
+					ps.setDouble(15, checks.risk(index));
+					ps.setString(16, checks.flags(index));
 					ps.addBatch();
 					index++;
 					if (index % BATCH_SIZE == 0) {

@@ -28,13 +28,14 @@ final class PostgresCopyRows implements FeatureRows {
 	}
 
 	@Override
-	public void insertDrafts(long batchId, Path spool, int[] cellOfDraft, long[] cellIds, IntConsumer progress) {
+	public void insertDrafts(long batchId, Path spool, int[] cellOfDraft, long[] cellIds, UploadChecks checks,
+			IntConsumer progress) {
 		this.jdbc.execute((Connection connection) -> {
 			try (FeatureSpool.Reader reader = FeatureSpool.reader(spool);
 					BinaryCopy copy = BinaryCopy.start(connection, "draft", DRAFT_COLUMNS)) {
 				int index = 0;
 				for (FeatureSpool.Row row = reader.next(); row != null; row = reader.next()) {
-					copy.row(14);
+					copy.row(16);
 					copy.int8(batchId);
 					copy.int8(cellIds[cellOfDraft[index]]);
 					copy.int4(row.seq());
@@ -46,6 +47,8 @@ final class PostgresCopyRows implements FeatureRows {
 					box(copy, row);
 					copy.float8(row.lengthMetres());
 					copy.text(row.properties());
+					copy.float8(checks.risk(index));
+					copy.text(checks.flags(index));
 					index++;
 					if (index % PROGRESS_EVERY == 0) {
 						progress.accept(index);

@@ -24,6 +24,7 @@ import org.assay.cells.CellSplitter;
 import org.assay.geo.FeatureFault;
 import org.assay.geo.FeatureProblem;
 import org.assay.geo.ReaderOptions;
+import tools.jackson.databind.ObjectMapper;
 
 import org.springframework.boot.context.event.ApplicationReadyEvent;
 import org.springframework.context.event.EventListener;
@@ -53,9 +54,15 @@ public class UploadService {
 
 	private final Map<UUID, CompletableFuture<Void>> running = new ConcurrentHashMap<>();
 
-	UploadService(UploadJobStore jobs, JdbcTemplate jdbc, TransactionTemplate transaction,
-			UploadProperties properties) {
+	private final ObjectMapper json;
+
+	private final CheckSettingsJson checkSettings;
+
+	UploadService(UploadJobStore jobs, JdbcTemplate jdbc, TransactionTemplate transaction, UploadProperties properties,
+			ObjectMapper json) {
 		this.jobs = jobs;
+		this.json = json;
+		this.checkSettings = new CheckSettingsJson(json);
 		this.writer = new BatchWriter(jdbc);
 		this.transaction = transaction;
 		this.properties = properties;
@@ -154,13 +161,21 @@ public class UploadService {
 			this.jobs.progress(id, "splitting", parsed.count(), 0);
 			CellPlan plan = CellSplitter.split(parsed.x(), parsed.y(), parsed.roadMetres(), settings.cellLimits());
 			int cells = plan.cells().size();
+			this.jobs.progress(id, "checking", 0, cells);
+			UploadChecks checks = UploadChecks.run(settings.checks(), folder.resolve("drafts.spool"), referenceSpool,
+					parsed.count(), plan.cellOfDraft(), cells, this.json,
+					ThrottledProgress.of((count) -> this.jobs.progress(id, "checking", count, cells)));
+			int[] rank = CellRanking.rank(settings.queueOrder(), settings.queueSeed(), checks.cellRisk(), boxes(plan));
 			this.jobs.progress(id, "writing", 0, cells);
 			Path referenceRows = referenceSpool;
+			String checkJson = this.checkSettings.write(settings.checks());
 			long batchId = this.transaction.execute((tx) -> {
-				long batch = this.writer.insertBatch(settings, accountId, parsed.count(), cells, 0, parsed.extent());
-				long[] cellIds = this.writer.insertCells(batch, plan);
-				this.writer.insertDrafts(batch, folder.resolve("drafts.spool"), plan.cellOfDraft(), cellIds,
+				long batch = this.writer.insertBatch(settings, accountId, parsed.count(), cells, 0, parsed.extent(),
+						checkJson);
+				long[] cellIds = this.writer.insertCells(batch, plan, checks.cellRisk(), rank);
+				this.writer.insertDrafts(batch, folder.resolve("drafts.spool"), plan.cellOfDraft(), cellIds, checks,
 						ThrottledProgress.of((count) -> this.jobs.progress(id, "writing", count, cells)));
+				this.writer.insertFlagCounts(batch, checks.counts());
 				if (referenceRows != null) {
 					this.writer.setReferenceCount(batch, this.writer.insertReference(batch, referenceRows));
 				}
@@ -178,6 +193,13 @@ public class UploadService {
 		finally {
 			deleteQuietly(folder);
 		}
+	}
+
+	private static double[][] boxes(CellPlan plan) {
+		return plan.cells()
+			.stream()
+			.map((cell) -> new double[] { cell.minX(), cell.minY(), cell.maxX(), cell.maxY() })
+			.toArray(double[][]::new);
 	}
 
 	private static Path parseReference(Path reference, Path spool) throws IOException {

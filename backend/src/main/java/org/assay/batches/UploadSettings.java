@@ -1,6 +1,7 @@
 package org.assay.batches;
 
 import org.assay.cells.CellLimits;
+import org.assay.checks.CheckSettings;
 
 /**
  * What a lead says about a batch when uploading it.
@@ -13,9 +14,30 @@ import org.assay.cells.CellLimits;
  * @param maxRoadKmPerCell the most kilometres of road per cell
  * @param leaseMinutes how long a claim lasts without activity
  * @param reasonCatalogue the reason catalogue to use
+ * @param checks the automated checks' thresholds and switches
+ * @param queueOrder the order in which cells are handed out
+ * @param queueSeed the seed of the random queue order
  */
 public record UploadSettings(String name, String modelName, String modelVersion, String imageryUrl,
-		int maxDraftsPerCell, double maxRoadKmPerCell, int leaseMinutes, String reasonCatalogue) {
+		int maxDraftsPerCell, double maxRoadKmPerCell, int leaseMinutes, String reasonCatalogue, CheckSettings checks,
+		QueueOrder queueOrder, long queueSeed) {
+
+	/**
+	 * Settings with the default checks, in risk order.
+	 * @param name the batch's name
+	 * @param modelName the drafting model's name
+	 * @param modelVersion the drafting model's version
+	 * @param imageryUrl an XYZ tile template ({z}, {x}, {y}), or {@code null}
+	 * @param maxDraftsPerCell the most drafts per cell
+	 * @param maxRoadKmPerCell the most kilometres of road per cell
+	 * @param leaseMinutes how long a claim lasts without activity
+	 * @param reasonCatalogue the reason catalogue to use
+	 */
+	public UploadSettings(String name, String modelName, String modelVersion, String imageryUrl, int maxDraftsPerCell,
+			double maxRoadKmPerCell, int leaseMinutes, String reasonCatalogue) {
+		this(name, modelName, modelVersion, imageryUrl, maxDraftsPerCell, maxRoadKmPerCell, leaseMinutes,
+				reasonCatalogue, CheckSettings.DEFAULTS, QueueOrder.RISK, 0);
+	}
 
 	/** Default claim lease, in minutes. */
 	public static final int DEFAULT_LEASE_MINUTES = 30;

@@ -9,53 +9,78 @@ package org.assay.checks;
 public enum FlagKind {
 
 	/** The draft runs along a mapped feature for all its length: a duplicate. */
-	MAPPED_ALREADY("mapped-already", 0.9),
+	MAPPED_ALREADY("mapped-already", "Already on the map", 0.9),
 
 	/** The draft runs along a mapped feature for part of its length and goes on. */
-	EXTENDS_MAPPED("extends-mapped", 0.5),
+	EXTENDS_MAPPED("extends-mapped", "Extends a mapped feature", 0.5),
 
 	/**
 	 * A road's end stops short of another road, or overshoots past it, by a few metres.
 	 */
-	NEAR_MISS("near-miss", 0.3),
+	NEAR_MISS("near-miss", "Nearly meets a road", 0.3),
 
 	/** Two roads cross where neither has a vertex: a missing junction, or a bridge. */
-	CROSSING_UNJOINED("crossing-unjoined", 0.3),
+	CROSSING_UNJOINED("crossing-unjoined", "Crosses a road without a junction", 0.3),
 
 	/** A small set of joined road drafts that touches no mapped road. */
-	ISOLATED_PIECE("isolated-piece", 0.4),
+	ISOLATED_PIECE("isolated-piece", "Isolated piece", 0.4),
 
 	/** A road crosses itself. */
-	SELF_CROSSING("self-crossing", 0.6),
+	SELF_CROSSING("self-crossing", "Crosses itself", 0.6),
 
 	/** Consecutive vertices at the same place. */
-	REPEATED_POINT("repeated-point", 0.1),
+	REPEATED_POINT("repeated-point", "Repeated point", 0.1),
 
 	/** A vertex where the line turns back on itself. */
-	SPIKE("spike", 0.5),
+	SPIKE("spike", "Spike", 0.5),
 
 	/** A segment shorter than the limit. */
-	SHORT_SEGMENT("short-segment", 0.1),
+	SHORT_SEGMENT("short-segment", "Very short segment", 0.1),
 
 	/** A road shorter than the limit in total. */
-	SHORT_ROAD("short-road", 0.5),
+	SHORT_ROAD("short-road", "Very short road", 0.5),
 
 	/** A building with less area than the limit. */
-	SMALL_BUILDING("small-building", 0.5),
+	SMALL_BUILDING("small-building", "Very small building", 0.5),
 
 	/** Two building drafts overlap. */
-	BUILDING_OVERLAP("building-overlap", 0.6),
+	BUILDING_OVERLAP("building-overlap", "Overlaps another building", 0.6),
 
 	/** A road draft runs through a building draft. */
-	ROAD_THROUGH_BUILDING("road-through-building", 0.5);
+	ROAD_THROUGH_BUILDING("road-through-building", "Road through a building", 0.5);
 
 	private final String code;
 
+	private final String label;
+
 	private final double weight;
 
-	FlagKind(String code, double weight) {
+	FlagKind(String code, String label, double weight) {
 		this.code = code;
+		this.label = label;
 		this.weight = weight;
+	}
+
+	/**
+	 * A short label for people, for example {@code Stops short of a road}.
+	 * @return the label
+	 */
+	public String label() {
+		return this.label;
+	}
+
+	/**
+	 * The kind with a code name.
+	 * @param code for example {@code near-miss}
+	 * @return the kind, or {@code null} when no kind has that code
+	 */
+	public static FlagKind ofCode(String code) {
+		for (FlagKind kind : values()) {
+			if (kind.code.equals(code)) {
+				return kind;
+			}
+		}
+		return null;
 	}
 
 	/**

@@ -34,6 +34,11 @@ import java.util.Set;
  */
 public final class RiskScore {
 
+	/** The formula in words, as the API shows it. */
+	public static final String FORMULA = "draft risk = 1 - c * product over the distinct flag kinds of (1 - weight),"
+			+ " c the model's confidence clamped to 0..1; cell risk = mean of its 3 highest draft risks"
+			+ " (of all, when it has fewer); an empty cell scores 0";
+
 	/** How many of a cell's riskiest drafts its score averages. */
 	public static final int TOP = 3;
 

@@ -31,7 +31,7 @@ class GeoJsonExport {
 
 	private static final String QUERY = "select d.id, d.source_id, d.kind, d.feature_class, d.confidence, d.geom,"
 			+ " v.verdict, v.reason_code, v.geom, v.created_at,"
-			+ " (select count(distinct x.validator_id) from verdict x where x.draft_id = d.id)"
+			+ " (select count(distinct x.validator_id) from verdict x where x.draft_id = d.id), d.risk, d.flags"
 			+ " from current_verdict c join draft d on d.id = c.draft_id join verdict v on v.id = c.verdict_id"
 			+ " where c.batch_id = ? and c.verdict in ('ACCEPT', 'AMEND') order by d.seq";
 
@@ -84,6 +84,16 @@ class GeoJsonExport {
 				generator.writeStringProperty("verdict", Verdict.valueOf(rs.getString(7)).name());
 				generator.writeStringProperty("reason_code", rs.getString(8));
 				generator.writeNumberProperty("validator_count", rs.getInt(11));
+				generator.writeNumberProperty("risk", Math.round(rs.getDouble(12) * 1000) / 1000.0);
+				String flags = rs.getString(13);
+				generator.writeStringProperty("flags", (flags != null) ? FlagCodes.of(this.json, flags) : "");
+				generator.writeName("flag_details");
+				if (flags != null) {
+					generator.writeRawValue(flags);
+				}
+				else {
+					generator.writeNull();
+				}
 				generator.writeStringProperty("decided_at",
 						rs.getObject(10, OffsetDateTime.class).toInstant().toString());
 				generator.writeEndObject();

@@ -82,7 +82,7 @@ public class QueueService {
 			List<Long> candidates = this.jdbc.queryForList("select id from cell where batch_id = ?"
 					+ " and finished_at is null and (holder_id is null or lease_expires_at <= ?)"
 					+ " and (assigned_to is null or assigned_to = ?)"
-					+ " order by case when assigned_to = ? then 0 else 1 end, seq fetch first " + CANDIDATES
+					+ " order by case when assigned_to = ? then 0 else 1 end, queue_rank, seq fetch first " + CANDIDATES
 					+ " rows only", Long.class, batchId, at, account.id(), account.id());
 			if (candidates.isEmpty()) {
 				return Optional.empty();

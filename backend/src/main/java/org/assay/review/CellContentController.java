@@ -12,6 +12,7 @@ import org.assay.batches.ReferenceFeature;
 import org.assay.geo.GeoJsonGeometries;
 import org.assay.queue.CellView;
 import org.assay.queue.QueueService;
+import tools.jackson.databind.ObjectMapper;
 
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
@@ -37,7 +38,11 @@ class CellContentController {
 
 	private final AccountService accounts;
 
-	CellContentController(QueueService queue, DraftStore drafts, VerdictService verdicts, AccountService accounts) {
+	private final ObjectMapper json;
+
+	CellContentController(QueueService queue, DraftStore drafts, VerdictService verdicts, AccountService accounts,
+			ObjectMapper json) {
+		this.json = json;
 		this.queue = queue;
 		this.drafts = drafts;
 		this.verdicts = verdicts;
@@ -56,6 +61,8 @@ class CellContentController {
 			properties.put("class", draft.featureClass());
 			properties.put("sourceId", draft.sourceId());
 			properties.put("seq", draft.seq());
+			properties.put("risk", Math.round(draft.risk() * 1000) / 1000.0);
+			properties.put("flags", (draft.flagsJson() != null) ? this.json.readTree(draft.flagsJson()) : List.of());
 			VerdictRecord verdict = current.get(draft.id());
 			properties.put("verdict", (verdict != null) ? VerdictView.of(verdict, null) : null);
 			features.add(feature(draft.id(), draft.geometry(), properties));

@@ -127,7 +127,7 @@ class PostgresCopyRowsIntegrationTests {
 		Integer before = jdbc.queryForObject("select count(*) from draft", Integer.class);
 		// a cell id that does not exist breaks the foreign key in the middle of the COPY
 		assertThatException().isThrownBy(() -> transaction.executeWithoutResult((tx) -> new PostgresCopyRows(jdbc)
-			.insertDrafts(batchRow(), spool, new int[rows.size()], new long[] { -1 }, (count) -> {
+			.insertDrafts(batchRow(), spool, new int[rows.size()], new long[] { -1 }, checks(rows.size()), (count) -> {
 			})));
 		assertThat(jdbc.queryForObject("select count(*) from draft", Integer.class)).isEqualTo(before);
 	}
@@ -157,9 +157,10 @@ class PostgresCopyRowsIntegrationTests {
 			for (int i = 0; i < drafts; i++) {
 				cellOfDraft[i] = i % 2;
 			}
-			long[] cellIds = writer.insertCells(batch, new CellPlan(List.of(cell(), cell()), cellOfDraft));
+			long[] cellIds = writer.insertCells(batch, new CellPlan(List.of(cell(), cell()), cellOfDraft),
+					new double[] { 0.5, 0.25 }, new int[] { 1, 0 });
 			if (drafts > 0) {
-				way.insertDrafts(batch, spool, cellOfDraft, cellIds, (count) -> {
+				way.insertDrafts(batch, spool, cellOfDraft, cellIds, checks(drafts), (count) -> {
 				});
 			}
 			return batch;
@@ -168,7 +169,20 @@ class PostgresCopyRowsIntegrationTests {
 
 	private static long batchRow() {
 		UploadSettings settings = new UploadSettings("copy test", "model", "1", null, 60, 15, 30, "standard");
-		return new BatchWriter(jdbc).insertBatch(settings, leadId, 0, 0, 0, new Envelope(0, 1, 0, 1));
+		return new BatchWriter(jdbc).insertBatch(settings, leadId, 0, 0, 0, new Envelope(0, 1, 0, 1), "{}");
+	}
+
+	/**
+	 * Risks and flags that differ from draft to draft; every third draft has no flags.
+	 */
+	private static UploadChecks checks(int drafts) {
+		double[] risk = new double[drafts];
+		String[] flags = new String[drafts];
+		for (int i = 0; i < drafts; i++) {
+			risk[i] = i / (double) (drafts + 1);
+			flags[i] = (i % 3 == 0) ? null : "[{\"code\":\"spike\",\"values\":{\"turnDegrees\":" + i + "}}]";
+		}
+		return UploadChecks.of(risk, flags, new int[drafts], 1);
 	}
 
 	private static CellBox cell() {
