@@ -1,7 +1,7 @@
 // The map's feature layers: the reference layer, the cell's drafts drawn by state, and the
 // current draft drawn on its own (halo, casing, line) above the others.
 
-import { currentStyles, draftCasing, draftLine, hidden, referenceStyle, stateOf } from './styles.js';
+import { currentStyles, draftCasing, draftLine, flagMarker, hidden, referenceStyle, stateOf } from './styles.js';
 
 const KIND_NAMES = { road: 'Road', building: 'Building' };
 export const kindName = (kind) => KIND_NAMES[kind] || kind || 'Feature';
@@ -48,6 +48,7 @@ export function createLayers(map, onPick, describe) {
   const casings = group(map, 'draftCasing', draftCasing, { interactive: false });
   const lines = group(map, 'draft', (f) => draftLine(stateOf(f), f.properties.kind));
   const current = ['halo', 'currentCasing', 'current'].map((pane) => group(map, pane, () => ({}), { interactive: false }));
+  const flagPoints = L.layerGroup().addTo(map);
   const byId = new Map(); // draft id -> {casing, line}
   let currentId = null;
 
@@ -81,6 +82,13 @@ export function createLayers(map, onPick, describe) {
       current[i].options.style = () => styles[part];
       current[i].addData(shown);
     });
+    flagPoints.clearLayers();
+    for (const flag of feature.properties.flags || []) {
+      if (!Array.isArray(flag.point)) continue;
+      L.circleMarker([flag.point[1], flag.point[0]], { ...flagMarker, pane: 'flags' })
+        .bindTooltip(flag.label || flag.code, { direction: 'top', className: 'draft-tip' })
+        .addTo(flagPoints);
+    }
   }
 
   return {

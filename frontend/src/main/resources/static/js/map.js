@@ -5,7 +5,7 @@ import { el } from './dom.js';
 import { outside } from './styles.js';
 
 // Bottom to top. Leaflet's own overlay pane is 400 and its marker pane (vertex handles) 600.
-const PANES = ['outside', 'reference', 'draftCasing', 'draft', 'halo', 'currentCasing', 'current'];
+const PANES = ['outside', 'reference', 'draftCasing', 'draft', 'halo', 'currentCasing', 'current', 'flags'];
 
 // Most XYZ imagery stops at 19 or 20; beyond that tiles are enlarged rather than missing.
 const IMAGERY_NATIVE_ZOOM = 19;

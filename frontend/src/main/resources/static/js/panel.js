@@ -57,6 +57,8 @@ export function showDraft(review) {
   byId('draft-confidence').textContent = confidence(p.confidence);
   byId('draft-class').textContent = p.class || NONE;
   byId('draft-source').textContent = p.sourceId ?? NONE;
+  byId('draft-risk').textContent = typeof p.risk === 'number' ? `${Math.round(p.risk * 100)} %` : NONE;
+  showFlags(p.flags || []);
   const decided = byId('draft-decided');
   const v = p.verdict;
   decided.hidden = !v;
@@ -66,6 +68,39 @@ export function showDraft(review) {
     decided.replaceChildren(`${STATES[v.verdict]?.label || v.verdict}: ${review.reasonLabel(v.verdict, v.reasonCode)}`,
       v.comment ? ` “${v.comment}”` : '', by ? el('span', { className: 'decided-by' }, by) : '');
   }
+}
+
+// How a measured value reads: its words and its unit.
+const VALUE_WORDS = {
+  share: ['share along it', '%'], hausdorffMetres: ['farthest apart', 'm'], alongMetres: ['length along it', 'm'],
+  gapMetres: ['gap', 'm'], angleDegrees: ['angle', '°'], totalMetres: ['total length', 'm'], drafts: ['drafts', ''],
+  crossings: ['crossings', ''], count: ['count', ''], shortestMetres: ['shortest', 'm'], turnDegrees: ['sharpest turn', '°'],
+  lengthMetres: ['length', 'm'], areaSquareMetres: ['area', 'm²'], overlapSquareMetres: ['overlap', 'm²'],
+  overlapShare: ['overlap share', '%'], insideMetres: ['inside the building', 'm'],
+};
+
+function valueText(name, value) {
+  const [words, unit] = VALUE_WORDS[name] || [name, ''];
+  if (value === null || value === undefined) return `${words} ${NONE}`;
+  if (unit === '%') return `${words} ${Math.round(value * 100)} %`;
+  const shown = Math.abs(value) >= 100 || Number.isInteger(value) ? Math.round(value) : value.toFixed(1);
+  return `${words} ${shown}${unit ? ` ${unit}` : ''}`;
+}
+
+/** Lists what the automated checks found on the current draft. */
+function showFlags(flags) {
+  const list = byId('draft-flags');
+  if (!flags.length) {
+    list.replaceChildren(el('li', { className: 'flag flag-none muted' }, 'Nothing found'));
+    return;
+  }
+  list.replaceChildren(...flags.map((flag) => {
+    const values = Object.entries(flag.values || {}).map(([name, value]) => valueText(name, value)).join(', ');
+    const other = flag.otherLayer ? ` (${flag.otherLayer === 'reference' ? 'mapped' : 'draft'} ${flag.otherId ?? ''})`.replace(' )', ')') : '';
+    return el('li', { className: 'flag', dataset: { code: flag.code } },
+      el('span', { className: 'flag-label' }, flag.label || flag.code),
+      values || other ? el('span', { className: 'flag-values' }, `${values}${other}`) : null);
+  }));
 }
 
 function reasonItem(reason, onPick) {

@@ -69,3 +69,6 @@ export function referenceStyle(part, feature) {
 
 /** The shade over everything outside the cell. */
 export const outside = { stroke: true, color: HALO, weight: 1.5, opacity: 0.9, fillColor: '#0d1014', fillOpacity: 0.28, interactive: false };
+
+/** Where a check points (the join of a near miss, a crossing): a white ring on black, unlike any draft. */
+export const flagMarker = { radius: 7, color: OKABE_ITO.black, weight: 3, opacity: 1, fillColor: HALO, fillOpacity: 0.9, dashArray: null, interactive: true };

@@ -66,6 +66,21 @@ class ReviewPageBrowserTests {
 		assertThat(text("cell-progress")).isEqualTo("0 / " + draftCount + " decided");
 		assertThat(text("draft-title")).isEqualTo("Draft 1 of " + draftCount);
 		assertThat(text("cell-title")).isEqualTo(cellTitle(cellId));
+		assertThat(this.jdbc.queryForObject("select risk from cell where id = ?", Double.class, cellId))
+			.as("the first cell handed out is the riskiest")
+			.isEqualTo(this.jdbc.queryForObject(
+					"select max(risk) from cell where batch_id = (select batch_id from cell where id = ?)",
+					Double.class, cellId));
+		String firstFlags = this.jdbc.queryForObject(
+				"select flags from draft where cell_id = ? order by seq fetch first 1 rows only", String.class, cellId);
+		List<WebElement> flagItems = this.browser.driver().findElements(By.cssSelector("#draft-flags li"));
+		if (firstFlags == null) {
+			assertThat(flagItems).extracting(WebElement::getText).containsExactly("Nothing found");
+		}
+		else {
+			assertThat(flagItems).as("flags listed beside the draft: " + firstFlags)
+				.hasSize(firstFlags.split("\"code\"", -1).length - 1);
+		}
 
 		String accepted = decide(1, "a");
 		String rejected = decide(2, "r", "2", Keys.ENTER);
