@@ -83,6 +83,8 @@ class BatchController {
 			@RequestParam(name = "checks", required = false) String checks,
 			@RequestParam(name = "queueOrder", defaultValue = "risk") String queueOrder,
 			@RequestParam(name = "queueSeed", required = false) Long queueSeed,
+			@RequestParam(name = "secondReviewShare", defaultValue = "0.1") double secondShare,
+			@RequestParam(name = "secondReviewSeed", required = false) Long secondSeed,
 			@RequestParam(name = "wait", defaultValue = "false") boolean wait) throws IOException {
 		Account account = this.accounts.current();
 		String batchName = (name == null || name.isBlank()) ? drafts.getOriginalFilename() : name.strip();
@@ -97,7 +99,8 @@ class BatchController {
 		}
 		UploadSettings settings = new UploadSettings(batchName, modelName.strip(), modelVersion.strip(),
 				blankToNull(imageryUrl), maxDraftsPerCell, maxRoadKmPerCell, leaseMinutes, catalogue, checkSettings,
-				order, (queueSeed != null) ? queueSeed : System.nanoTime());
+				order, (queueSeed != null) ? queueSeed : System.nanoTime(), secondShare,
+				(secondSeed != null) ? secondSeed : System.nanoTime());
 		SettingsCheck.check(settings);
 		Files.createDirectories(this.properties.spoolDir());
 		Path draftsFile = receive(drafts);

@@ -40,12 +40,11 @@ final class BatchWriter {
 			Envelope extent, String checkSettings) {
 		KeyHolder keys = new GeneratedKeyHolder();
 		this.jdbc.update((connection) -> {
-			PreparedStatement ps = connection.prepareStatement(
-					"insert into batch (name, model_name, model_version,"
-							+ " imagery_url, reason_catalogue, state, created_by, created_at, max_drafts_per_cell,"
-							+ " max_road_km_per_cell, lease_minutes, draft_count, cell_count, reference_count,"
-							+ " min_x, min_y, max_x, max_y, check_settings, queue_order, queue_seed)"
-							+ " values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)",
+			PreparedStatement ps = connection.prepareStatement("insert into batch (name, model_name, model_version,"
+					+ " imagery_url, reason_catalogue, state, created_by, created_at, max_drafts_per_cell,"
+					+ " max_road_km_per_cell, lease_minutes, draft_count, cell_count, reference_count,"
+					+ " min_x, min_y, max_x, max_y, check_settings, queue_order, queue_seed, second_share,"
+					+ " second_seed) values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)",
 					new String[] { "id" });
 			ps.setString(1, settings.name());
 			ps.setString(2, settings.modelName());
@@ -68,6 +67,8 @@ final class BatchWriter {
 			ps.setString(19, checkSettings);
 			ps.setString(20, settings.queueOrder().apiName());
 			ps.setLong(21, settings.queueSeed());
+			ps.setDouble(22, settings.secondShare());
+			ps.setLong(23, settings.secondSeed());
 			return ps;
 		}, keys);
 		return keys.getKeyAs(Number.class).longValue();
@@ -78,10 +79,14 @@ final class BatchWriter {
 	 * @return the cell ids, by index in the plan
 	 */
 	long[] insertCells(long batchId, CellPlan plan, double[] risk, int[] rank) {
+		return insertCells(batchId, plan, risk, rank, new boolean[plan.cells().size()]);
+	}
+
+	long[] insertCells(long batchId, CellPlan plan, double[] risk, int[] rank, boolean[] twice) {
 		List<CellBox> cells = plan.cells();
 		this.jdbc.batchUpdate("insert into cell (batch_id, seq, min_x, min_y, max_x, max_y, draft_count,"
-				+ " road_length_m, over_limit, decided_count, version, risk, queue_rank)"
-				+ " values (?, ?, ?, ?, ?, ?, ?, ?, ?, 0, 0, ?, ?)", new BatchPreparedStatementSetter() {
+				+ " road_length_m, over_limit, decided_count, version, risk, queue_rank, second_review)"
+				+ " values (?, ?, ?, ?, ?, ?, ?, ?, ?, 0, 0, ?, ?, ?)", new BatchPreparedStatementSetter() {
 
 					@Override
 					public void setValues(PreparedStatement ps, int i) throws SQLException {
@@ -97,6 +102,7 @@ final class BatchWriter {
 						ps.setBoolean(9, cell.overLimit());
 						ps.setDouble(10, risk[i]);
 						ps.setInt(11, rank[i]);
+						ps.setBoolean(12, twice[i]);
 					}
 
 					@Override

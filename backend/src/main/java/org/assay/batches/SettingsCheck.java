@@ -28,6 +28,7 @@ final class SettingsCheck {
 		require(settings.maxRoadKmPerCell() > 0 && settings.maxRoadKmPerCell() <= 10_000,
 				"maxRoadKmPerCell must be above 0 and at most 10000");
 		require(settings.leaseMinutes() >= 1 && settings.leaseMinutes() <= 24 * 60, "leaseMinutes must be 1 to 1440");
+		require(settings.secondShare() >= 0 && settings.secondShare() <= 1, "secondReviewShare must be 0 to 1");
 		String url = settings.imageryUrl();
 		require(url == null || (url.length() <= 2000 && TILE_TEMPLATE.matcher(url).matches() && url.contains("{z}")
 				&& url.contains("{x}") && url.contains("{y}")),

@@ -172,7 +172,8 @@ public class UploadService {
 			long batchId = this.transaction.execute((tx) -> {
 				long batch = this.writer.insertBatch(settings, accountId, parsed.count(), cells, 0, parsed.extent(),
 						checkJson);
-				long[] cellIds = this.writer.insertCells(batch, plan, checks.cellRisk(), rank);
+				long[] cellIds = this.writer.insertCells(batch, plan, checks.cellRisk(), rank,
+						SecondReviewPick.choose(cells, settings.secondShare(), settings.secondSeed()));
 				this.writer.insertDrafts(batch, folder.resolve("drafts.spool"), plan.cellOfDraft(), cellIds, checks,
 						ThrottledProgress.of((count) -> this.jobs.progress(id, "writing", count, cells)));
 				this.writer.insertFlagCounts(batch, checks.counts());

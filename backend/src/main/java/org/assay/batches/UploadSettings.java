@@ -17,10 +17,15 @@ import org.assay.checks.CheckSettings;
  * @param checks the automated checks' thresholds and switches
  * @param queueOrder the order in which cells are handed out
  * @param queueSeed the seed of the random queue order
+ * @param secondShare the share of cells reviewed twice, blind, 0 to 1
+ * @param secondSeed the seed that chooses them
  */
 public record UploadSettings(String name, String modelName, String modelVersion, String imageryUrl,
 		int maxDraftsPerCell, double maxRoadKmPerCell, int leaseMinutes, String reasonCatalogue, CheckSettings checks,
-		QueueOrder queueOrder, long queueSeed) {
+		QueueOrder queueOrder, long queueSeed, double secondShare, long secondSeed) {
+
+	/** The share of cells reviewed twice unless a lead says otherwise. */
+	public static final double DEFAULT_SECOND_SHARE = 0.1;
 
 	/**
 	 * Settings with the default checks, in risk order.
@@ -36,7 +41,7 @@ public record UploadSettings(String name, String modelName, String modelVersion,
 	public UploadSettings(String name, String modelName, String modelVersion, String imageryUrl, int maxDraftsPerCell,
 			double maxRoadKmPerCell, int leaseMinutes, String reasonCatalogue) {
 		this(name, modelName, modelVersion, imageryUrl, maxDraftsPerCell, maxRoadKmPerCell, leaseMinutes,
-				reasonCatalogue, CheckSettings.DEFAULTS, QueueOrder.RISK, 0);
+				reasonCatalogue, CheckSettings.DEFAULTS, QueueOrder.RISK, 0, DEFAULT_SECOND_SHARE, 0);
 	}
 
 	/** Default claim lease, in minutes. */
@@ -44,6 +49,18 @@ public record UploadSettings(String name, String modelName, String modelVersion,
 
 	/** The reason catalogue every installation has. */
 	public static final String DEFAULT_CATALOGUE = "standard";
+
+	/**
+	 * These settings with another share of cells reviewed twice.
+	 * @param share the share, 0 to 1
+	 * @param seed the seed that chooses the cells
+	 * @return new settings
+	 */
+	public UploadSettings withSecondReview(double share, long seed) {
+		return new UploadSettings(this.name, this.modelName, this.modelVersion, this.imageryUrl, this.maxDraftsPerCell,
+				this.maxRoadKmPerCell, this.leaseMinutes, this.reasonCatalogue, this.checks, this.queueOrder,
+				this.queueSeed, share, seed);
+	}
 
 	CellLimits cellLimits() {
 		return new CellLimits(this.maxDraftsPerCell, this.maxRoadKmPerCell * 1000.0,

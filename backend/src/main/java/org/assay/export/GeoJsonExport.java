@@ -33,7 +33,13 @@ class GeoJsonExport {
 			+ " v.verdict, v.reason_code, v.geom, v.created_at,"
 			+ " (select count(distinct x.validator_id) from verdict x where x.draft_id = d.id), d.risk, d.flags"
 			+ " from current_verdict c join draft d on d.id = c.draft_id join verdict v on v.id = c.verdict_id"
-			+ " where c.batch_id = ? and c.verdict in ('ACCEPT', 'AMEND') order by d.seq";
+			+ " join cell k on k.id = d.cell_id left join second_pass s on s.cell_id = k.id"
+			+ " where c.batch_id = ? and c.verdict in ('ACCEPT', 'AMEND')"
+			// only final verdicts: not while a cell's second review is due or a ruling is
+			// waiting
+			+ " and (k.second_review = false or s.finished_at is not null)"
+			+ " and not exists (select 1 from ruling_case r where r.draft_id = d.id and r.ruled_at is null)"
+			+ " order by d.seq";
 
 	private final JdbcTemplate jdbc;
 

@@ -41,7 +41,7 @@ class CellRows {
 			}
 			CellView v = this.view;
 			return new CellView(v.id(), v.batchId(), v.seq(), v.bbox(), v.draftCount(), v.decidedCount(), v.overLimit(),
-					null, null, v.assignedTo(), v.finished());
+					null, null, v.assignedTo(), v.finished(), v.pass());
 		}
 
 		boolean heldBy(long accountId, Instant now) {
@@ -66,7 +66,7 @@ class CellRows {
 		CellView view = new CellView(rs.getLong(1), rs.getLong(2), rs.getInt(3),
 				new double[] { rs.getDouble(4), rs.getDouble(5), rs.getDouble(6), rs.getDouble(7) }, rs.getInt(8),
 				rs.getInt(9), rs.getBoolean(10), rs.getString(11), leaseExpires, rs.getString(13),
-				rs.getObject(14) != null);
+				rs.getObject(14) != null, 1);
 		return new Row(view, (holderId != null) ? holderId.longValue() : null, leaseExpires);
 	}
 

@@ -16,7 +16,9 @@ import java.time.Instant;
  * @param leaseExpiresAt when that claim lapses, or {@code null}
  * @param assignedTo the username a lead assigned it to, or {@code null}
  * @param finished whether every draft has a current verdict
+ * @param pass the review pass the view is of: 1 the first review, 2 the blind second
+ * review (then the counts, holder and lease are the second pass's)
  */
 public record CellView(long id, long batchId, int seq, double[] bbox, int draftCount, int decidedCount,
-		boolean overLimit, String holder, Instant leaseExpiresAt, String assignedTo, boolean finished) {
+		boolean overLimit, String holder, Instant leaseExpiresAt, String assignedTo, boolean finished, int pass) {
 }

@@ -47,9 +47,12 @@ public class QueueService {
 
 	private final Clock clock;
 
-	QueueService(JdbcTemplate jdbc, CellRows cells, BatchService batches, AccountService accounts,
+	private final SecondPasses second;
+
+	QueueService(JdbcTemplate jdbc, CellRows cells, SecondPasses second, BatchService batches, AccountService accounts,
 			ApplicationEventPublisher events, Clock clock) {
 		this.jdbc = jdbc;
+		this.second = second;
 		this.cells = cells;
 		this.batches = batches;
 		this.accounts = accounts;
@@ -76,6 +79,20 @@ public class QueueService {
 				+ " and c.finished_at is null order by c.seq", batchId, account.id(), at);
 		if (!held.isEmpty()) {
 			return Optional.of(renew(held.get(0).view().id(), account, batch.leaseMinutes()));
+		}
+		List<Long> heldSecond = this.second.heldBy(account.id(), batchId, now);
+		if (!heldSecond.isEmpty()) {
+			return Optional.of(renew(heldSecond.get(0), account, batch.leaseMinutes()));
+		}
+		Integer assigned = this.jdbc.queryForObject(
+				"select count(*) from cell where batch_id = ? and assigned_to = ?"
+						+ " and finished_at is null and (holder_id is null or lease_expires_at <= ?)",
+				Integer.class, batchId, account.id(), at);
+		if (assigned == 0) {
+			Optional<Long> secondPass = this.second.claim(account.id(), batchId, batch.leaseMinutes(), now);
+			if (secondPass.isPresent()) {
+				return Optional.of(viewFor(account, secondPass.get()));
+			}
 		}
 		OffsetDateTime expires = utc(now.plus(batch.leaseMinutes(), ChronoUnit.MINUTES));
 		for (int round = 0; round < 20; round++) {
@@ -109,6 +126,11 @@ public class QueueService {
 	public void release(Account account, long cellId) {
 		CellRows.Row row = row(cellId);
 		BatchSummary batch = this.batches.get(row.view().batchId());
+		Optional<SecondPasses.Pass> pass = this.second.find(cellId);
+		if (pass.isPresent() && pass.get().heldBy(account.id(), this.clock.instant())) {
+			this.second.release(cellId);
+			return;
+		}
 		if (!row.heldBy(account.id(), this.clock.instant()) && !this.batches.runs(account, batch)) {
 			throw new ResponseStatusException(HttpStatus.FORBIDDEN, "You do not hold cell " + cellId);
 		}
@@ -146,12 +168,16 @@ public class QueueService {
 	@Transactional(readOnly = true)
 	public List<CellView> mine(Account account) {
 		Instant now = this.clock.instant();
-		return this.cells
+		List<CellView> mine = new java.util.ArrayList<>(this.cells
 			.query("where ((c.holder_id = ? and c.lease_expires_at > ?) or c.assigned_to = ?)"
 					+ " and c.finished_at is null order by c.batch_id, c.seq", account.id(), utc(now), account.id())
 			.stream()
 			.map((row) -> row.viewAt(now))
-			.toList();
+			.toList());
+		for (long cellId : this.second.heldBy(account.id(), null, now)) {
+			mine.add(viewFor(account, cellId));
+		}
+		return mine;
 	}
 
 	/**
@@ -180,6 +206,10 @@ public class QueueService {
 	public CellView readable(Account account, long cellId) {
 		CellRows.Row row = row(cellId);
 		Instant now = this.clock.instant();
+		Optional<SecondPasses.Pass> pass = this.second.find(cellId);
+		if (pass.isPresent() && pass.get().validatorId() != null && pass.get().validatorId() == account.id()) {
+			return pass.get().view(row.view(), now);
+		}
 		boolean assigned = account.username().equals(row.view().assignedTo());
 		if (!row.heldBy(account.id(), now) && !assigned
 				&& !this.batches.runs(account, this.batches.get(row.view().batchId()))) {
@@ -228,6 +258,7 @@ public class QueueService {
 			finishedNow = this.jdbc.update("update cell set finished_at = ? where id = ? and finished_at is null",
 					utc(this.clock.instant()), cellId) == 1;
 			if (finishedNow) {
+				this.second.openIfChosen(cellId, cell.batchId(), validatorId, this.clock.instant());
 				this.events.publishEvent(new CellFinished(cell.batchId(), cellId, validatorId));
 			}
 		}
@@ -250,6 +281,9 @@ public class QueueService {
 
 	private CellView renew(long cellId, Account account, int leaseMinutes) {
 		Instant now = this.clock.instant();
+		if (this.second.renew(cellId, account.id(), leaseMinutes, now)) {
+			return viewFor(account, cellId);
+		}
 		int updated = this.jdbc.update(
 				"update cell set lease_expires_at = ?, version = version + 1"
 						+ " where id = ? and holder_id = ? and lease_expires_at > ?",
@@ -259,6 +293,38 @@ public class QueueService {
 					"You hold no live claim on cell " + cellId + "; take it again");
 		}
 		return view(cellId);
+	}
+
+	/**
+	 * Counts a change in the second pass of a cell; call after {@link #requireHeld} gave
+	 * pass 2, in the verdict's transaction.
+	 * @param cellId the cell
+	 * @param delta +1 for a first second-pass decision on a draft, 0 for a changed one
+	 * @param account the second validator
+	 * @return the second pass's progress; {@code finishedNow} when this decision ended it
+	 */
+	@Transactional
+	public CellProgress countSecondDecision(long cellId, int delta, Account account) {
+		boolean finishedNow = this.second.count(cellId, delta, this.clock.instant());
+		CellView cell = viewFor(account, cellId);
+		return new CellProgress(cellId, cell.decidedCount(), cell.draftCount(), cell.finished(), finishedNow);
+	}
+
+	/**
+	 * The cell as an account works it: the second pass for its second validator, else the
+	 * cell.
+	 * @param account who asks
+	 * @param cellId the cell
+	 * @return the view
+	 */
+	CellView viewFor(Account account, long cellId) {
+		CellRows.Row row = row(cellId);
+		Instant now = this.clock.instant();
+		Optional<SecondPasses.Pass> pass = this.second.find(cellId);
+		if (pass.isPresent() && pass.get().validatorId() != null && pass.get().validatorId() == account.id()) {
+			return pass.get().view(row.view(), now);
+		}
+		return row.viewAt(now);
 	}
 
 	private CellView view(long cellId) {

@@ -51,8 +51,8 @@ class CellContentController {
 
 	@GetMapping(path = "/api/cells/{cellId}/drafts", produces = { "application/geo+json", "application/json" })
 	Map<String, Object> drafts(@PathVariable long cellId) {
-		this.queue.readable(this.accounts.current(), cellId);
-		Map<Long, VerdictRecord> current = this.verdicts.currentInCell(cellId);
+		CellView cell = this.queue.readable(this.accounts.current(), cellId);
+		Map<Long, VerdictRecord> current = this.verdicts.shownInCell(cell);
 		List<Map<String, Object>> features = new ArrayList<>();
 		for (Draft draft : this.drafts.inCell(cellId)) {
 			Map<String, Object> properties = new LinkedHashMap<>();

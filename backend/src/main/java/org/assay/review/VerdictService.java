@@ -11,6 +11,7 @@ import org.assay.batches.BatchSummary;
 import org.assay.batches.Draft;
 import org.assay.batches.DraftStore;
 import org.assay.queue.CellProgress;
+import org.assay.queue.CellView;
 import org.assay.queue.QueueService;
 
 import org.springframework.context.ApplicationEventPublisher;
@@ -42,9 +43,15 @@ public class VerdictService {
 
 	private final Clock clock;
 
-	VerdictService(VerdictStore store, DraftStore drafts, BatchService batches, QueueService queue,
-			ReasonCatalogue catalogue, ApplicationEventPublisher events, Clock clock) {
+	private final PassVerdicts passes;
+
+	private final RulingCases cases;
+
+	VerdictService(VerdictStore store, PassVerdicts passes, RulingCases cases, DraftStore drafts, BatchService batches,
+			QueueService queue, ReasonCatalogue catalogue, ApplicationEventPublisher events, Clock clock) {
 		this.store = store;
+		this.passes = passes;
+		this.cases = cases;
 		this.drafts = drafts;
 		this.batches = batches;
 		this.queue = queue;
@@ -71,17 +78,40 @@ public class VerdictService {
 		}
 		Draft draft = this.drafts.find(request.draftId())
 			.orElseThrow(() -> new ResponseStatusException(HttpStatus.NOT_FOUND, "No draft " + request.draftId()));
-		this.queue.requireHeld(account, draft.cellId());
+		CellView held = this.queue.requireHeld(account, draft.cellId());
+		if (this.cases.ruled(draft.id())) {
+			throw new ResponseStatusException(HttpStatus.CONFLICT,
+					"Draft " + draft.id() + " was ruled by a lead; its verdict is final");
+		}
 		BatchSummary batch = this.batches.get(draft.batchId());
 		List<ReasonCode> reasons = this.catalogue.reasons(batch.reasonCatalogue());
 		VerdictRules.Checked checked = VerdictRules.check(request, draft.kind(), reasons);
-		UUID previous = this.store.currentId(draft.id()).orElse(null);
+		int pass = (held.pass() == PassVerdicts.SECOND) ? PassVerdicts.SECOND : PassVerdicts.FIRST;
+		UUID previous = (pass == PassVerdicts.SECOND)
+				? Optional.ofNullable(this.passes.ofDraft(draft.id()).get(PassVerdicts.SECOND))
+					.map(VerdictRecord::id)
+					.orElse(null)
+				: this.store.currentId(draft.id()).orElse(null);
 		VerdictRecord record = new VerdictRecord(id, draft.id(), draft.cellId(), draft.batchId(), account.id(),
 				account.username(), checked.verdict(), checked.reason().code(), checked.comment(), checked.geometry(),
 				previous, this.clock.instant());
-		this.store.insert(record);
-		boolean first = this.store.makeCurrent(record);
-		CellProgress progress = this.queue.countDecision(draft.cellId(), first ? 1 : 0, account.id());
+		this.store.insert(record, pass);
+		CellProgress progress;
+		if (pass == PassVerdicts.SECOND) {
+			boolean first = this.passes.put(record, PassVerdicts.SECOND, draft.confidence());
+			progress = this.queue.countSecondDecision(draft.cellId(), first ? 1 : 0, account);
+			if (progress.finishedNow()) {
+				this.cases.sync(draft.cellId());
+			}
+		}
+		else {
+			boolean first = this.store.makeCurrent(record);
+			this.passes.put(record, PassVerdicts.FIRST, draft.confidence());
+			progress = this.queue.countDecision(draft.cellId(), first ? 1 : 0, account.id());
+			if (progress.finished()) {
+				this.cases.sync(draft.cellId());
+			}
+		}
 		this.events.publishEvent(
 				new VerdictGiven(id, draft.batchId(), draft.cellId(), draft.id(), account.id(), checked.verdict()));
 		return new VerdictOutcome(record, progress, false);
@@ -110,6 +140,18 @@ public class VerdictService {
 	@Transactional(readOnly = true)
 	public java.util.Map<Long, VerdictRecord> currentInCell(long cellId) {
 		return this.store.currentInCell(cellId);
+	}
+
+	/**
+	 * The verdicts a validator may see in a cell as they work it: in a blind second pass
+	 * only their own, else the current ones.
+	 * @param cell the cell as the validator works it
+	 * @return verdicts by draft id
+	 */
+	@Transactional(readOnly = true)
+	public java.util.Map<Long, VerdictRecord> shownInCell(CellView cell) {
+		return (cell.pass() == PassVerdicts.SECOND) ? this.passes.inCell(cell.id(), PassVerdicts.SECOND)
+				: this.store.currentInCell(cell.id());
 	}
 
 	/**

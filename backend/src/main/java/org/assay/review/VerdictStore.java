@@ -65,13 +65,17 @@ class VerdictStore {
 	}
 
 	void insert(VerdictRecord record) {
+		insert(record, PassVerdicts.FIRST);
+	}
+
+	void insert(VerdictRecord record, int pass) {
 		this.jdbc.update(
 				"insert into verdict (id, draft_id, cell_id, batch_id, validator_id, verdict, reason_code, comment,"
-						+ " geom, supersedes, created_at) values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)",
+						+ " geom, supersedes, created_at, review_pass) values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)",
 				record.id(), record.draftId(), record.cellId(), record.batchId(), record.validatorId(),
 				record.verdict().name(), record.reasonCode(), record.comment(),
 				(record.geometry() != null) ? Wkb.write(record.geometry()) : null, record.supersedes(),
-				record.createdAt().atOffset(ZoneOffset.UTC));
+				record.createdAt().atOffset(ZoneOffset.UTC), pass);
 	}
 
 	/**
@@ -96,11 +100,7 @@ class VerdictStore {
 	}
 
 	private static VerdictRecord map(ResultSet rs, int n) throws SQLException {
-		byte[] geometry = rs.getBytes(10);
-		return new VerdictRecord(rs.getObject(1, UUID.class), rs.getLong(2), rs.getLong(3), rs.getLong(4),
-				rs.getLong(5), rs.getString(6), Verdict.valueOf(rs.getString(7)), rs.getString(8), rs.getString(9),
-				(geometry != null) ? Wkb.read(geometry) : null, rs.getObject(11, UUID.class),
-				rs.getObject(12, OffsetDateTime.class).toInstant());
+		return VerdictStoreRows.map(rs, n);
 	}
 
 }

@@ -51,7 +51,7 @@ abstract class BatchFlowScenarios {
 	long upload(int roads, int buildings, int maxDraftsPerCell) {
 		ApiClient.Response response = this.lead.upload(
 				Map.of("name", "flow test", "modelName", "segmenter", "modelVersion", "3.1", "maxDraftsPerCell",
-						String.valueOf(maxDraftsPerCell)),
+						String.valueOf(maxDraftsPerCell), "secondReviewShare", "0"),
 				Map.of("drafts", TestBatches.drafts(roads, buildings), "reference", TestBatches.reference(roads)),
 				"wait=true");
 		assertThat(response.status()).as(response.text()).isEqualTo(201);

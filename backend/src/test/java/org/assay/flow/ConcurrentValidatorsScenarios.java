@@ -48,7 +48,8 @@ abstract class ConcurrentValidatorsScenarios {
 		String run = UUID.randomUUID().toString().substring(0, 6);
 		this.accounts.create("lead-" + run, "Lead", "pass-" + run, Role.LEAD);
 		ApiClient lead = ApiClient.signIn(this.port, "lead-" + run, "pass-" + run);
-		ApiClient.Response upload = lead.upload(Map.of("name", "busy", "maxDraftsPerCell", "4"),
+		ApiClient.Response upload = lead.upload(
+				Map.of("name", "busy", "maxDraftsPerCell", "4", "secondReviewShare", "0"),
 				Map.of("drafts", TestBatches.drafts(600, 200)), "wait=true");
 		assertThat(upload.status()).as(upload.text()).isEqualTo(201);
 		long batchId = upload.json().get("batchId").asLong();

@@ -216,7 +216,8 @@ abstract class UploadChecksScenarios {
 	}
 
 	private static Map<String, String> fields(Map<String, String> extra) {
-		Map<String, String> fields = new HashMap<>(Map.of("name", "checks test", "maxDraftsPerCell", "1"));
+		Map<String, String> fields = new HashMap<>(
+				Map.of("name", "checks test", "maxDraftsPerCell", "1", "secondReviewShare", "0"));
 		fields.putAll(extra);
 		return fields;
 	}
