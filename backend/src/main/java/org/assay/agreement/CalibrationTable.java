@@ -84,6 +84,29 @@ public final class CalibrationTable {
 		return table;
 	}
 
+	/**
+	 * A table from counts already binned (for example by the database), band {@code b}
+	 * holding confidences in {@code [b/n, (b+1)/n)}, the last band also 1.
+	 * @param drafts the drafts in each band, lowest band first
+	 * @param accepted the accepted drafts in each band
+	 * @param level the confidence level of the intervals
+	 * @return the table
+	 */
+	public static CalibrationTable ofCounts(int[] drafts, int[] accepted, double level) {
+		if (drafts.length != accepted.length || drafts.length < 1) {
+			throw new IllegalArgumentException("Need one count of each kind per band and at least one band");
+		}
+		CalibrationTable table = new CalibrationTable(drafts.length, level);
+		for (int b = 0; b < drafts.length; b++) {
+			if (accepted[b] < 0 || accepted[b] > drafts[b]) {
+				throw new IllegalArgumentException("Band " + b + " accepts " + accepted[b] + " of " + drafts[b]);
+			}
+			table.drafts[b] = drafts[b];
+			table.accepted[b] = accepted[b];
+		}
+		return table;
+	}
+
 	private int bandOf(double confidence) {
 		if (!(confidence >= 0 && confidence <= 1)) {
 			throw new IllegalArgumentException("A model confidence must be in [0, 1], not " + confidence);
