@@ -42,6 +42,8 @@ function batchRow(batch, me) {
   take.addEventListener('click', () => takeNextCell(batch, take, status));
   const actions = el('div', { className: 'actions' }, take);
   if (isLead(me)) {
+    actions.append(el('a', { className: 'button button-quiet', href: `rulings.html?batch=${encodeURIComponent(batch.id)}` },
+      'Rulings', el('span', { className: 'visually-hidden' }, ` of ${batch.name}`)));
     actions.append(el('a', {
       className: 'button button-quiet',
       href: `api/batches/${encodeURIComponent(batch.id)}/export.geojson`,
