@@ -151,6 +151,25 @@ abstract class SecondReviewScenarios {
 		assertThat(other.get("pass").asInt()).as("no second review at a share of 0").isEqualTo(1);
 	}
 
+	@Test
+	void aLeadChangesTheShareForCellsNobodyHasTouched() {
+		long batchId = upload("0");
+		long started = claim(this.first, batchId).get("id").asLong();
+		ApiClient.Response changed = this.lead.put("/api/batches/" + batchId + "/second-review",
+				Map.of("share", 1, "seed", 11));
+		assertThat(changed.status()).as(changed.text()).isEqualTo(200);
+		// four cells of ten drafts; the claimed one keeps its mark
+		assertThat(changed.json().get("cellsChanged").asInt()).isEqualTo(3);
+		assertThat(changed.json().get("cellsChosen").asInt()).isEqualTo(3);
+		assertThat(changed.json().get("share").asDouble()).isEqualTo(1.0);
+		assertThat(changed.json().get("seed").asLong()).isEqualTo(11);
+		assertThat(this.first.put("/api/batches/" + batchId + "/second-review", Map.of("share", 0.5)).status())
+			.isEqualTo(403);
+		assertThat(this.lead.put("/api/batches/" + batchId + "/second-review", Map.of("share", 2)).status())
+			.isEqualTo(400);
+		assertThat(started).isPositive();
+	}
+
 	private long upload(String share) {
 		ApiClient.Response response = this.lead.upload(Map.of("name", "second review", "maxDraftsPerCell", "10",
 				"secondReviewShare", share, "secondReviewSeed", "7"), Map.of("drafts", TestBatches.drafts(40, 0)),
