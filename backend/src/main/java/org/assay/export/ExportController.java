@@ -9,7 +9,13 @@ import org.assay.accounts.AccountService;
 import org.assay.batches.BatchSummary;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.Polygonal;
-import tools.jackson.databind.ObjectMapper;
+import java.util.Set;
+import java.util.TreeSet;
+
+import org.assay.export.training.TrainingSetSpec;
+import org.assay.review.ReasonCatalogue;
+import org.assay.review.ReasonCode;
+import org.assay.review.Verdict;
 
 import org.springframework.http.ContentDisposition;
 import org.springframework.http.HttpHeaders;
@@ -40,15 +46,18 @@ class ExportController {
 
 	private final AccountService accounts;
 
-	private final ObjectMapper json;
+	private final TrainingSetExport training;
+
+	private final ReasonCatalogue catalogue;
 
 	ExportController(GeoJsonExport geoJson, GeoPackageExport geoPackage, org.assay.batches.BatchService batches,
-			AccountService accounts, ObjectMapper json) {
+			AccountService accounts, TrainingSetExport training, ReasonCatalogue catalogue) {
+		this.training = training;
+		this.catalogue = catalogue;
 		this.geoJson = geoJson;
 		this.geoPackage = geoPackage;
 		this.batches = batches;
 		this.accounts = accounts;
-		this.json = json;
 	}
 
 	@GetMapping("/api/batches/{batchId}/export.geojson")
@@ -99,6 +108,64 @@ class ExportController {
 			.contentLength(size)
 			.header(HttpHeaders.CONTENT_DISPOSITION, attachment("batch-" + batchId + "-verified.gpkg"))
 			.body(body);
+	}
+
+	/**
+	 * The hard-negative training set as a zip, streamed. Options: {@code zoom} of the
+	 * mask tiles (default 18), {@code roadWidth} in metres (default 6), {@code reasons}
+	 * (comma separated reason codes; all when absent), {@code amended} (add amended
+	 * drafts as corrected examples), {@code within} (a polygon of interest).
+	 */
+	@GetMapping("/api/batches/{batchId}/training.zip")
+	ResponseEntity<StreamingResponseBody> trainingSet(@PathVariable long batchId,
+			@RequestParam(defaultValue = "" + TrainingSetSpec.DEFAULT_ZOOM) int zoom,
+			@RequestParam(defaultValue = "" + TrainingSetSpec.DEFAULT_ROAD_WIDTH) double roadWidth,
+			@RequestParam(required = false) String reasons, @RequestParam(defaultValue = "false") boolean amended,
+			@RequestParam(required = false) String within) {
+		BatchSummary batch = this.batches.requireRun(this.accounts.current(), batchId);
+		TrainingSetSpec spec;
+		try {
+			spec = new TrainingSetSpec(zoom, roadWidth, "");
+		}
+		catch (IllegalArgumentException ex) {
+			throw new ResponseStatusException(HttpStatus.BAD_REQUEST, ex.getMessage());
+		}
+		Set<String> codes = reasonCodes(batch, reasons, amended);
+		TrainingSetExport.Selection selection = new TrainingSetExport.Selection(spec, codes, amended,
+				options(false, false, within).within());
+		StreamingResponseBody body = (out) -> this.training.write(batch, selection, out);
+		return ResponseEntity.ok()
+			.contentType(MediaType.parseMediaType("application/zip"))
+			.header(HttpHeaders.CONTENT_DISPOSITION, attachment("batch-" + batchId + "-training-z" + zoom + ".zip"))
+			.body(body);
+	}
+
+	/** The reason codes asked for, each one of the batch's REJECT (or AMEND) codes. */
+	private Set<String> reasonCodes(BatchSummary batch, String reasons, boolean amended) {
+		Set<String> codes = new TreeSet<>();
+		if (reasons == null || reasons.isBlank()) {
+			return codes;
+		}
+		Set<String> known = new TreeSet<>();
+		for (ReasonCode reason : this.catalogue.reasons(batch.reasonCatalogue())) {
+			if (reason.verdict() == Verdict.REJECT || (amended && reason.verdict() == Verdict.AMEND)) {
+				known.add(reason.code());
+			}
+		}
+		for (String code : reasons.split(",")) {
+			String trimmed = code.trim();
+			if (trimmed.isEmpty()) {
+				continue;
+			}
+			if (!known.contains(trimmed)) {
+				throw new ResponseStatusException(HttpStatus.BAD_REQUEST,
+						"reasons: '" + trimmed + "' is not a reason code of a "
+								+ (amended ? "REJECT or AMEND" : "REJECT")
+								+ " verdict in this batch's catalogue; known: " + String.join(", ", known));
+			}
+			codes.add(trimmed);
+		}
+		return codes;
 	}
 
 	private ExportOptions options(boolean onlyNew, boolean onlyReviewedTwice, String within) {

@@ -4,13 +4,20 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.time.Instant;
 import java.time.OffsetDateTime;
+import java.util.Collections;
+import java.util.List;
+import java.util.Set;
 import java.util.function.Consumer;
+import java.util.function.Predicate;
+import java.util.stream.Collectors;
 
 import org.assay.geo.FeatureKind;
 import org.assay.geo.Wkb;
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.prep.PreparedGeometry;
+import org.locationtech.jts.geom.prep.PreparedGeometryFactory;
+import org.assay.review.Verdict;
 
 import org.springframework.jdbc.core.JdbcTemplate;
 import org.springframework.jdbc.core.RowCallbackHandler;
@@ -35,7 +42,7 @@ class VerifiedRows {
 			+ " join cell k on k.id = d.cell_id left join second_pass s on s.cell_id = k.id"
 			+ " left join pass_verdict p2 on p2.draft_id = d.id and p2.review_pass = 2"
 			+ " left join pass_verdict p0 on p0.draft_id = d.id and p0.review_pass = 0"
-			+ " where c.batch_id = ? and c.verdict in ('ACCEPT', 'AMEND')"
+			+ " where c.batch_id = ? and c.verdict in (%s)"
 			+ " and (k.second_review = false or s.finished_at is not null)"
 			+ " and not exists (select 1 from ruling_case r where r.draft_id = d.id and r.ruled_at is null)";
 
@@ -57,8 +64,9 @@ class VerifiedRows {
 	 * @param kind road or building
 	 * @param featureClass its class, or {@code null}
 	 * @param confidence the model's confidence
-	 * @param geometry the final geometry: as drafted, or as amended
-	 * @param verdict ACCEPT or AMEND
+	 * @param drafted the geometry as the model drafted it
+	 * @param amended the corrected geometry of an AMEND verdict, or {@code null}
+	 * @param verdict the final verdict
 	 * @param reasonCode the final verdict's reason
 	 * @param decidedAt when the final verdict was given
 	 * @param risk the checks' risk score
@@ -67,8 +75,13 @@ class VerifiedRows {
 	 * @param ruled whether a lead ruled
 	 */
 	record Row(long draftId, String sourceId, FeatureKind kind, String featureClass, double confidence,
-			Geometry geometry, String verdict, String reasonCode, Instant decidedAt, double risk, String flagsJson,
-			int reviews, boolean ruled) {
+			Geometry drafted, Geometry amended, String verdict, String reasonCode, Instant decidedAt, double risk,
+			String flagsJson, int reviews, boolean ruled) {
+
+		/** The final geometry: as amended, or else as drafted. */
+		Geometry geometry() {
+			return (this.amended != null) ? this.amended : this.drafted;
+		}
 
 		/**
 		 * How the final verdict came about: {@code ruled}, {@code agreed} or
@@ -91,7 +104,7 @@ class VerifiedRows {
 	 * Streams the rows of one kind of a batch that pass the options, in file order.
 	 */
 	void forEach(long batchId, ExportOptions options, FeatureKind kind, Consumer<Row> sink) {
-		StringBuilder sql = new StringBuilder(QUERY);
+		StringBuilder sql = new StringBuilder(QUERY.formatted("'ACCEPT', 'AMEND'"));
 		if (kind != null) {
 			sql.append(" and d.kind = '").append(kind.jsonName()).append('\'');
 		}
@@ -106,23 +119,63 @@ class VerifiedRows {
 			// the drafted box, widened: an amended shape stays near its draft
 			sql.append(" and d.max_x >= ? and d.min_x <= ? and d.max_y >= ? and d.min_y <= ?");
 		}
+		query(batchId, sql, box, options.prepared(), sink);
+	}
+
+	/**
+	 * Streams the rows of a batch whose final verdict is one of some verdicts, in file
+	 * order.
+	 * @param batchId the batch
+	 * @param verdicts the verdicts to take
+	 * @param reasons only these reason codes, or all when empty
+	 * @param within only drafts whose drafted geometry intersects it, or {@code null}
+	 * @param sink receives the rows
+	 */
+	void forEachFinal(long batchId, Set<Verdict> verdicts, Set<String> reasons, Geometry within, Consumer<Row> sink) {
+		String list = verdicts.stream().map((v) -> "'" + v.name() + "'").sorted().collect(Collectors.joining(", "));
+		StringBuilder sql = new StringBuilder(QUERY.formatted(list));
+		if (!reasons.isEmpty()) {
+			sql.append(" and v.reason_code in (")
+				.append(String.join(", ", Collections.nCopies(reasons.size(), "?")))
+				.append(')');
+		}
+		Envelope box = (within != null) ? within.getEnvelopeInternal() : null;
+		if (box != null) {
+			sql.append(" and d.max_x >= ? and d.min_x <= ? and d.max_y >= ? and d.min_y <= ?");
+		}
+		PreparedGeometry prepared = (within != null) ? PreparedGeometryFactory.prepare(within) : null;
+		List<String> codes = reasons.stream().sorted().toList();
+		query(batchId, codes, sql, box, 0, (prepared != null) ? (row) -> prepared.intersects(row.drafted()) : null,
+				sink);
+	}
+
+	private void query(long batchId, StringBuilder sql, Envelope box, PreparedGeometry within, Consumer<Row> sink) {
+		// the drafted box, widened: an amended shape stays near its draft
+		query(batchId, List.of(), sql, box, 0.01, (within != null) ? (row) -> within.intersects(row.geometry()) : null,
+				sink);
+	}
+
+	private void query(long batchId, List<String> codes, StringBuilder sql, Envelope box, double pad,
+			Predicate<Row> keep, Consumer<Row> sink) {
 		sql.append(" order by d.seq");
-		PreparedGeometry within = options.prepared();
 		this.readOnly.executeWithoutResult((tx) -> this.jdbc.query((connection) -> {
 			var statement = connection.prepareStatement(sql.toString());
 			statement.setFetchSize(1000);
-			statement.setLong(1, batchId);
+			int at = 1;
+			statement.setLong(at++, batchId);
+			for (String code : codes) {
+				statement.setString(at++, code);
+			}
 			if (box != null) {
-				double pad = 0.01;
-				statement.setDouble(2, box.getMinX() - pad);
-				statement.setDouble(3, box.getMaxX() + pad);
-				statement.setDouble(4, box.getMinY() - pad);
-				statement.setDouble(5, box.getMaxY() + pad);
+				statement.setDouble(at++, box.getMinX() - pad);
+				statement.setDouble(at++, box.getMaxX() + pad);
+				statement.setDouble(at++, box.getMinY() - pad);
+				statement.setDouble(at, box.getMaxY() + pad);
 			}
 			return statement;
 		}, (RowCallbackHandler) (rs) -> {
 			Row row = row(rs);
-			if (within == null || within.intersects(row.geometry())) {
+			if (keep == null || keep.test(row)) {
 				sink.accept(row);
 			}
 		}));
@@ -131,9 +184,9 @@ class VerifiedRows {
 	private static Row row(ResultSet rs) throws SQLException {
 		byte[] amended = rs.getBytes(9);
 		return new Row(rs.getLong(1), rs.getString(2), FeatureKind.fromJson(rs.getString(3)), rs.getString(4),
-				rs.getDouble(5), Wkb.read((amended != null) ? amended : rs.getBytes(6)), rs.getString(7),
-				rs.getString(8), rs.getObject(10, OffsetDateTime.class).toInstant(), rs.getDouble(11), rs.getString(12),
-				rs.getInt(13), rs.getInt(14) == 1);
+				rs.getDouble(5), Wkb.read(rs.getBytes(6)), (amended != null) ? Wkb.read(amended) : null,
+				rs.getString(7), rs.getString(8), rs.getObject(10, OffsetDateTime.class).toInstant(), rs.getDouble(11),
+				rs.getString(12), rs.getInt(13), rs.getInt(14) == 1);
 	}
 
 }

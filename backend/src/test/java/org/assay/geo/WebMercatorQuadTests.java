@@ -85,6 +85,27 @@ class WebMercatorQuadTests {
 		assertThat(WebMercatorQuad.contains(12, 0, -1)).isFalse();
 	}
 
+	@Test
+	void knownPointsProjectAsGdalDoesAndFallInTheHandComputedTiles() {
+		// EPSG:3857 metres printed by GDAL 3.6.2's gdaltransform (PROJ) for
+		// "-s_srs EPSG:4326 -t_srs EPSG:3857"; tile indexes computed by hand from them:
+		// x = floor((E + 20037508.3427892) / span), y = floor((20037508.3427892 - N) /
+		// span),
+		// span = 256 * cellSize(z) (OGC 17-083r2, WebMercatorQuad)
+		checkPoint(-31.7, 40.9, -3528827.85814677, 4997602.85716766, 1687, 1537, 107988, 98381);
+		checkPoint(13.405, 52.52, 1492237.77408383, 6894699.80128242, 2200, 1343, 140833, 85971);
+		checkPoint(-122.4194, 37.7749, -13627665.2712181, 4547675.35434056, 655, 1583, 41928, 101324);
+		checkPoint(151.2093, -33.8688, 16832542.2792073, -4011198.64730757, 3768, 2457, 241179, 157310);
+	}
+
+	private static void checkPoint(double lon, double lat, double easting, double northing, int x12, int y12, int x18,
+			int y18) {
+		assertThat(WebMercatorQuad.easting(lon)).isCloseTo(easting, within(1e-3));
+		assertThat(WebMercatorQuad.northing(lat)).isCloseTo(northing, within(1e-3));
+		assertThat(WebMercatorQuad.tileAt(lon, lat, 12)).isEqualTo(new Tile(12, x12, y12));
+		assertThat(WebMercatorQuad.tileAt(lon, lat, 18)).isEqualTo(new Tile(18, x18, y18));
+	}
+
 	private static void checkZoom(int z, double scaleDenominator, double cellSize) {
 		assertThat(WebMercatorQuad.cellSize(z)).isCloseTo(cellSize, within(cellSize * 1e-12));
 		assertThat(WebMercatorQuad.scaleDenominator(z)).isCloseTo(scaleDenominator, within(scaleDenominator * 1e-12));

@@ -60,8 +60,9 @@ final class TileMask {
 	 * Marks a road: a lineal geometry in longitude/latitude, buffered to a width.
 	 * @param lonLat LineString or MultiLineString
 	 * @param widthMetres the road's width on the ground, more than 0
+	 * @return the number of pixels the road covers in this tile, marked before or not
 	 */
-	void addRoad(Geometry lonLat, double widthMetres) {
+	int addRoad(Geometry lonLat, double widthMetres) {
 		if (!(lonLat instanceof Lineal)) {
 			throw new IllegalArgumentException("a road is a LineString or MultiLineString");
 		}
@@ -71,21 +72,22 @@ final class TileMask {
 		double half = widthMetres / 2 / this.frame.metresPerPixel();
 		Geometry line = clip(this.frame.toPixels(lonLat), half + 2);
 		if (line.isEmpty()) {
-			return;
+			return 0;
 		}
 		BufferParameters parameters = new BufferParameters(QUADRANT_SEGMENTS);
-		fill(BufferOp.bufferOp(line, half, parameters));
+		return fill(BufferOp.bufferOp(line, half, parameters));
 	}
 
 	/**
 	 * Marks an area: a polygonal geometry in longitude/latitude.
 	 * @param lonLat Polygon or MultiPolygon
+	 * @return the number of pixels the area covers in this tile, marked before or not
 	 */
-	void addArea(Geometry lonLat) {
+	int addArea(Geometry lonLat) {
 		if (!(lonLat instanceof Polygonal)) {
 			throw new IllegalArgumentException("an area is a Polygon or MultiPolygon");
 		}
-		fill(this.frame.toPixels(lonLat));
+		return fill(this.frame.toPixels(lonLat));
 	}
 
 	/** The number of marked pixels. */
@@ -127,11 +129,12 @@ final class TileMask {
 		return pixels.intersection(pixels.getFactory().toGeometry(box));
 	}
 
-	private void fill(Geometry area) {
+	private int fill(Geometry area) {
 		Envelope box = area.getEnvelopeInternal();
 		if (area.isEmpty() || box.getMaxX() < 0 || box.getMaxY() < 0 || box.getMinX() > SIZE || box.getMinY() > SIZE) {
-			return;
+			return 0;
 		}
+		int covered = 0;
 		EdgeList edges = EdgeList.of(area);
 		int firstRow = Math.max(0, (int) Math.floor(box.getMinY() - 0.5));
 		int lastRow = Math.min(SIZE - 1, (int) Math.ceil(box.getMaxY()));
@@ -145,13 +148,17 @@ final class TileMask {
 			}
 			Arrays.sort(crossings, 0, n);
 			for (int k = 0; k + 1 < n; k += 2) {
-				markSpan(row, crossings[k], crossings[k + 1]);
+				covered += markSpan(row, crossings[k], crossings[k + 1]);
 			}
 		}
+		return covered;
 	}
 
-	/** Marks the pixels of a row whose centres lie in {@code [from, to)}. */
-	private void markSpan(int row, double from, double to) {
+	/**
+	 * Marks the pixels of a row whose centres lie in {@code [from, to)}.
+	 * @return how many pixels the span covers
+	 */
+	private int markSpan(int row, double from, double to) {
 		int first = Math.max(0, (int) Math.ceil(from - 0.5));
 		int last = Math.min(SIZE - 1, (int) Math.ceil(to - 0.5) - 1);
 		for (int col = first; col <= last; col++) {
@@ -161,6 +168,7 @@ final class TileMask {
 				this.marked++;
 			}
 		}
+		return Math.max(0, last - first + 1);
 	}
 
 }

@@ -144,11 +144,11 @@ class TileMaskTests {
 		return line(tile, -10, row, 266, row);
 	}
 
-	private static Geometry line(Tile tile, double col1, double row1, double col2, double row2) {
+	static Geometry line(Tile tile, double col1, double row1, double col2, double row2) {
 		return Wkb.WGS84.createLineString(new Coordinate[] { lonLat(tile, col1, row1), lonLat(tile, col2, row2) });
 	}
 
-	private static LinearRing ring(Tile tile, double col1, double row1, double col2, double row2) {
+	static LinearRing ring(Tile tile, double col1, double row1, double col2, double row2) {
 		return Wkb.WGS84.createLinearRing(new Coordinate[] { lonLat(tile, col1, row1), lonLat(tile, col2, row1),
 				lonLat(tile, col2, row2), lonLat(tile, col1, row2), lonLat(tile, col1, row1) });
 	}
