@@ -155,6 +155,72 @@ abstract class ExportReaderScenarios {
 		assertThat(this.validator.get("/api/batches/" + this.batchId + "/export.gpkg").status()).isEqualTo(403);
 	}
 
+	@Test
+	void gdalReadsTheTrainingSetZipItsGeoJsonAndItsMasks() throws Exception {
+		Path file = download("/api/batches/" + this.batchId + "/training.zip?amended=true", "training.zip");
+		String zip = "/vsizip/" + file;
+		long rejected = 40 - this.kept.size(); // 30 roads and 10 buildings, the rest kept
+		long amended = this.kept.values().stream().filter("AMEND"::equals).count();
+		assertThat(ogrinfo("-ro", "-so", "-al", zip + "/drafts.geojson")).contains("using driver `GeoJSON' successful")
+			.contains("Feature Count: " + (rejected + amended))
+			.contains("ID[\"EPSG\",4326]");
+		assertThat(ogrinfo("-ro", "-so", "-al", zip + "/corrected.geojson")).contains("Feature Count: " + amended);
+		String rejectedRoad = ogrinfo("-ro", "-al", "-q", "-where", "source_id = 'r-5'", zip + "/drafts.geojson");
+		assertThat(rejectedRoad).contains("verdict (String) = REJECT").contains("reason_code (String) = not-a-feature");
+
+		// each tile's mask as GDAL reads it: 256 x 256, one Byte band, and as many pixels
+		// at 255 as the manifest says
+		List<String> manifest = entry(file, "manifest.csv").lines().toList();
+		assertThat(manifest).hasSizeGreaterThan(1);
+		for (String line : manifest.subList(1, manifest.size())) {
+			String[] f = line.split(",", -1);
+			assertThat(f[0]).isEqualTo("18");
+			String info = gdalinfo("-hist", zip + "/" + f[14]);
+			assertThat(info).contains("Driver: PNG/Portable Network Graphics")
+				.contains("Size is 256, 256")
+				.contains("Band 1 Block=256x1 Type=Byte");
+			assertThat(marked(info)).as(line).isEqualTo(Long.parseLong(f[15]));
+			if (!f[16].isEmpty()) {
+				assertThat(marked(gdalinfo("-hist", zip + "/" + f[16]))).as(line).isEqualTo(Long.parseLong(f[17]));
+			}
+		}
+		assertThat(entry(file, "README.txt")).contains("checked by people", "zoom 18");
+
+		// only one reason code; a code the catalogue lacks is refused
+		ApiClient.Response narrowed = this.lead
+			.get("/api/batches/" + this.batchId + "/training.zip?reasons=shape-wrong");
+		assertThat(narrowed.status()).isEqualTo(200);
+		Path empty = this.folder.resolve("narrowed.zip");
+		Files.write(empty, narrowed.body());
+		assertThat(ogrinfo("-ro", "-so", "-al", "/vsizip/" + empty + "/drafts.geojson")).contains("Feature Count: 0");
+		ApiClient.Response unknown = this.lead.get("/api/batches/" + this.batchId + "/training.zip?reasons=nonsense");
+		assertThat(unknown.status()).isEqualTo(400);
+		assertThat(unknown.text()).contains("nonsense", "not-a-feature");
+		assertThat(this.lead.get("/api/batches/" + this.batchId + "/training.zip?zoom=30").status()).isEqualTo(400);
+		assertThat(this.validator.get("/api/batches/" + this.batchId + "/training.zip").status()).isEqualTo(403);
+	}
+
+	/** The count in the last bucket (255) of gdalinfo's 256-bucket histogram. */
+	private static long marked(String gdalinfo) {
+		int at = gdalinfo.indexOf("256 buckets from -0.5 to 255.5:");
+		assertThat(at).as(gdalinfo).isNotNegative();
+		String[] counts = gdalinfo.substring(at).lines().skip(1).findFirst().orElseThrow().trim().split("\\s+");
+		assertThat(counts).hasSize(256);
+		return Long.parseLong(counts[255]);
+	}
+
+	private static String entry(Path zip, String name) throws IOException {
+		try (java.util.zip.ZipFile file = new java.util.zip.ZipFile(zip.toFile())) {
+			return new String(file.getInputStream(file.getEntry(name)).readAllBytes(), StandardCharsets.UTF_8);
+		}
+	}
+
+	static String gdalinfo(String... args) throws IOException, InterruptedException {
+		List<String> command = new ArrayList<>(List.of("/usr/bin/gdalinfo"));
+		command.addAll(List.of(args));
+		return run(command);
+	}
+
 	private Path download(String path, String name) throws IOException {
 		ApiClient.Response response = this.lead.get(path);
 		assertThat(response.status()).as(response.text()).isEqualTo(200);
@@ -174,6 +240,10 @@ abstract class ExportReaderScenarios {
 	static String ogrinfo(String... args) throws IOException, InterruptedException {
 		List<String> command = new ArrayList<>(List.of(OGRINFO.toString()));
 		command.addAll(List.of(args));
+		return run(command);
+	}
+
+	private static String run(List<String> command) throws IOException, InterruptedException {
 		Process process = new ProcessBuilder(command).redirectErrorStream(true).start();
 		String out = new String(process.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
 		assertThat(process.waitFor(60, TimeUnit.SECONDS)).isTrue();
