@@ -22,7 +22,7 @@ import com.sun.management.OperatingSystemMXBean;
  * </ul>
  * It also counts the collections and their accumulated time.
  */
-final class StepWatch {
+public final class StepWatch {
 
 	private static final long MB = 1L << 20;
 
@@ -42,7 +42,7 @@ final class StepWatch {
 	/**
 	 * Collects garbage, then resets the peaks and starts counting.
 	 */
-	void start() {
+	public void start() {
 		System.gc();
 		this.pools.forEach(MemoryPoolMXBean::resetPeakUsage);
 		this.collections = this.collectors.stream().mapToLong(GarbageCollectorMXBean::getCollectionCount).sum();
@@ -54,7 +54,7 @@ final class StepWatch {
 	 * Stops counting.
 	 * @return the figures
 	 */
-	Usage stop() {
+	public Usage stop() {
 		long peak = 0;
 		long oldPeak = 0;
 		for (MemoryPoolMXBean pool : this.pools) {
@@ -82,7 +82,7 @@ final class StepWatch {
 	 * @param collections number of collections
 	 * @param collectionMillis their accumulated time
 	 */
-	record Usage(long cpuNanos, long peakMb, long oldPeakMb, long collections, long collectionMillis) {
+	public record Usage(long cpuNanos, long peakMb, long oldPeakMb, long collections, long collectionMillis) {
 
 		@Override
 		public String toString() {

@@ -1,34 +1,27 @@
 package org.assay.export.training;
 
-import java.awt.image.BufferedImage;
-import java.awt.image.DataBufferByte;
-import java.io.ByteArrayOutputStream;
-import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.util.Arrays;
-
-import javax.imageio.ImageIO;
 
 import org.assay.geo.WebMercatorQuad;
 import org.assay.geo.WebMercatorQuad.Tile;
+import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.Lineal;
 import org.locationtech.jts.geom.Polygonal;
-import org.locationtech.jts.operation.buffer.BufferOp;
-import org.locationtech.jts.operation.buffer.BufferParameters;
 
 /**
  * A label mask of one WebMercatorQuad tile: 256 x 256 pixels, each 0 (nothing) or 255
- * (the labelled geometry), written as a single-band 8-bit greyscale PNG.
+ * (the labelled geometry), written as a single-band 8-bit greyscale PNG
+ * ({@link GreyPng}).
  *
  * <p>
- * A road is buffered to its width in ground metres (half the width on each side, round
- * caps and joins) and an area is taken as it is; a pixel is marked when its centre lies
- * inside, by the even-odd rule, so holes stay unmarked. This is the usual "pixel centre"
- * rule of polygon rasterisers (common practice): a band of width {@code w} pixels across
- * the tile marks {@code round(w)} rows, give or take one where its edges meet pixel
- * centres.
+ * A road is widened to its width in ground metres (half the width on each side, round
+ * caps and joins: the pixel centres within half the width of its centre line) and an area
+ * is taken as it is; a pixel is marked when its centre lies inside, for areas by the
+ * even-odd rule, so holes stay unmarked. This is the usual "pixel centre" rule of polygon
+ * rasterisers (common practice): a band of width {@code w} pixels across the tile marks
+ * {@code round(w)} rows, give or take one where its edges meet pixel centres.
  *
  * <pre>
  * TileMask mask = new TileMask(WebMercatorQuad.tileAt(lon, lat, 18));
@@ -39,8 +32,6 @@ import org.locationtech.jts.operation.buffer.BufferParameters;
 final class TileMask {
 
 	static final int SIZE = WebMercatorQuad.TILE_SIZE;
-
-	private static final int QUADRANT_SEGMENTS = 8;
 
 	private final TilePixels frame;
 
@@ -57,37 +48,62 @@ final class TileMask {
 	}
 
 	/**
-	 * Marks a road: a lineal geometry in longitude/latitude, buffered to a width.
+	 * Marks a road: a lineal geometry in longitude/latitude, widened to a width. The road
+	 * covers the pixels whose centres lie within half the width of its centre line, which
+	 * is its buffer with round caps and joins, drawn exactly: each segment marks the
+	 * pixel centres within that distance of it.
 	 * @param lonLat LineString or MultiLineString
 	 * @param widthMetres the road's width on the ground, more than 0
-	 * @return the number of pixels the road covers in this tile, marked before or not
+	 * @return whether the road covers a pixel of this tile, marked before or not
 	 */
-	int addRoad(Geometry lonLat, double widthMetres) {
+	boolean addRoad(Geometry lonLat, double widthMetres) {
 		if (!(lonLat instanceof Lineal)) {
 			throw new IllegalArgumentException("a road is a LineString or MultiLineString");
 		}
 		if (!(widthMetres > 0)) {
 			throw new IllegalArgumentException("the road width must be more than 0 m");
 		}
-		double half = widthMetres / 2 / this.frame.metresPerPixel();
-		Geometry line = clip(this.frame.toPixels(lonLat), half + 2);
-		if (line.isEmpty()) {
-			return 0;
+		double r = widthMetres / 2 / this.frame.metresPerPixel();
+		Envelope box = lonLat.getEnvelopeInternal();
+		double west = this.frame.col(box.getMinX());
+		double east = this.frame.col(box.getMaxX());
+		double north = this.frame.row(box.getMaxY());
+		double south = this.frame.row(box.getMinY());
+		if (east < -r || west > SIZE + r || south < -r || north > SIZE + r) {
+			return false;
 		}
-		BufferParameters parameters = new BufferParameters(QUADRANT_SEGMENTS);
-		return fill(BufferOp.bufferOp(line, half, parameters));
+		boolean covered = false;
+		for (int i = 0; i < lonLat.getNumGeometries(); i++) {
+			Coordinate[] line = lonLat.getGeometryN(i).getCoordinates();
+			if (line.length == 0) {
+				continue;
+			}
+			double ax = this.frame.col(line[0].x);
+			double ay = this.frame.row(line[0].y);
+			if (line.length == 1) {
+				covered |= markCapsule(ax, ay, ax, ay, r);
+			}
+			for (int k = 1; k < line.length; k++) {
+				double bx = this.frame.col(line[k].x);
+				double by = this.frame.row(line[k].y);
+				covered |= markCapsule(ax, ay, bx, by, r);
+				ax = bx;
+				ay = by;
+			}
+		}
+		return covered;
 	}
 
 	/**
 	 * Marks an area: a polygonal geometry in longitude/latitude.
 	 * @param lonLat Polygon or MultiPolygon
-	 * @return the number of pixels the area covers in this tile, marked before or not
+	 * @return whether the area covers a pixel of this tile, marked before or not
 	 */
-	int addArea(Geometry lonLat) {
+	boolean addArea(Geometry lonLat) {
 		if (!(lonLat instanceof Polygonal)) {
 			throw new IllegalArgumentException("an area is a Polygon or MultiPolygon");
 		}
-		return fill(this.frame.toPixels(lonLat));
+		return fill(this.frame.toPixels(lonLat)) > 0;
 	}
 
 	/** The number of marked pixels. */
@@ -105,28 +121,43 @@ final class TileMask {
 	 * @return the PNG file's bytes
 	 */
 	byte[] png() {
-		BufferedImage image = new BufferedImage(SIZE, SIZE, BufferedImage.TYPE_BYTE_GRAY);
-		byte[] raster = ((DataBufferByte) image.getRaster().getDataBuffer()).getData();
-		System.arraycopy(this.pixels, 0, raster, 0, raster.length);
-		ByteArrayOutputStream out = new ByteArrayOutputStream(1024);
-		try {
-			ImageIO.write(image, "png", out);
-		}
-		catch (IOException ex) {
-			throw new UncheckedIOException(ex);
-		}
-		return out.toByteArray();
+		return GreyPng.encode(this.pixels, SIZE, SIZE);
 	}
 
 	/**
-	 * Cuts a pixel-space geometry to the tile and a margin, so that buffers stay small.
+	 * Marks the pixels whose centres lie within {@code r} of the segment from {@code a}
+	 * to {@code b} (pixel coordinates).
+	 * @return whether the segment covers a pixel
 	 */
-	private static Geometry clip(Geometry pixels, double margin) {
-		Envelope box = new Envelope(-margin, SIZE + margin, -margin, SIZE + margin);
-		if (box.contains(pixels.getEnvelopeInternal())) {
-			return pixels;
+	private boolean markCapsule(double ax, double ay, double bx, double by, double r) {
+		int firstCol = Math.max(0, (int) Math.ceil(Math.min(ax, bx) - r - 0.5));
+		int lastCol = Math.min(SIZE - 1, (int) Math.floor(Math.max(ax, bx) + r - 0.5));
+		int firstRow = Math.max(0, (int) Math.ceil(Math.min(ay, by) - r - 0.5));
+		int lastRow = Math.min(SIZE - 1, (int) Math.floor(Math.max(ay, by) + r - 0.5));
+		double dx = bx - ax;
+		double dy = by - ay;
+		double length2 = dx * dx + dy * dy;
+		double r2 = r * r;
+		boolean covered = false;
+		for (int row = firstRow; row <= lastRow; row++) {
+			double py = row + 0.5 - ay;
+			for (int col = firstCol; col <= lastCol; col++) {
+				double px = col + 0.5 - ax;
+				// the nearest point of the segment: a + t (b - a), t clamped to [0, 1]
+				double t = (length2 > 0) ? Math.max(0, Math.min(1, (px * dx + py * dy) / length2)) : 0;
+				double ex = px - t * dx;
+				double ey = py - t * dy;
+				if (ex * ex + ey * ey <= r2) {
+					covered = true;
+					int at = row * SIZE + col;
+					if (this.pixels[at] == 0) {
+						this.pixels[at] = (byte) 255;
+						this.marked++;
+					}
+				}
+			}
 		}
-		return pixels.intersection(pixels.getFactory().toGeometry(box));
+		return covered;
 	}
 
 	private int fill(Geometry area) {

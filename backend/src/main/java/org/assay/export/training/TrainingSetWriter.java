@@ -95,6 +95,8 @@ public final class TrainingSetWriter implements AutoCloseable {
 
 	private boolean finished;
 
+	private final long startedAt = System.nanoTime();
+
 	/**
 	 * Starts the zip: writes the README and opens {@code drafts.geojson}.
 	 * @param out where the zip goes; closed by {@link #finish}
@@ -183,6 +185,7 @@ public final class TrainingSetWriter implements AutoCloseable {
 	 */
 	public Summary finish() throws IOException {
 		this.finished = true;
+		long finishing = System.nanoTime();
 		endCollection(this.drafts);
 		this.zip.closeEntry();
 		try {
@@ -191,7 +194,8 @@ public final class TrainingSetWriter implements AutoCloseable {
 				s.execute("create index touch_by_tile on touch (tile, sample)");
 			}
 			writeCorrected();
-			Summary summary = writeTiles();
+			long tilesFrom = System.nanoTime();
+			Summary summary = writeTiles(finishing - this.startedAt, tilesFrom - finishing);
 			this.zip.finish();
 			this.zip.flush();
 			return summary;
@@ -222,8 +226,12 @@ public final class TrainingSetWriter implements AutoCloseable {
 	 * @param tiles tiles with a mask
 	 * @param maskPixels marked pixels over all drafted masks
 	 * @param correctedPixels marked pixels over all corrected masks
+	 * @param spoolNanos time spent taking samples in (reading them included)
+	 * @param sortNanos time spent indexing the spool and writing the corrected GeoJSON
+	 * @param tileNanos time spent drawing and writing the masks and the manifests
 	 */
-	public record Summary(long samples, long corrected, long tiles, long maskPixels, long correctedPixels) {
+	public record Summary(long samples, long corrected, long tiles, long maskPixels, long correctedPixels,
+			long spoolNanos, long sortNanos, long tileNanos) {
 	}
 
 	/** The keys of the tiles a geometry may touch, widened by half a road's width. */
@@ -272,7 +280,8 @@ public final class TrainingSetWriter implements AutoCloseable {
 		this.zip.closeEntry();
 	}
 
-	private Summary writeTiles() throws IOException, SQLException {
+	private Summary writeTiles(long spoolNanos, long sortNanos) throws IOException, SQLException {
+		long start = System.nanoTime();
 		Path csv = this.folder.resolve("manifest.csv");
 		Path jsonl = this.folder.resolve("manifest.jsonl");
 		long tiles = 0;
@@ -312,7 +321,8 @@ public final class TrainingSetWriter implements AutoCloseable {
 		}
 		copy("manifest.csv", csv);
 		copy("manifest.jsonl", jsonl);
-		return new Summary(this.samples, this.corrected, tiles, maskPixels, correctedPixels);
+		return new Summary(this.samples, this.corrected, tiles, maskPixels, correctedPixels, spoolNanos, sortNanos,
+				System.nanoTime() - start);
 	}
 
 	/** The drafts that touch one tile, drawn into its masks. */
@@ -336,19 +346,19 @@ public final class TrainingSetWriter implements AutoCloseable {
 
 		void add(long draftId, String sourceId, String verdict, String reason, FeatureKind kind, Geometry draft,
 				Geometry fixed) {
-			int covered = draw(this.drafted, kind, draft);
+			boolean covered = draw(this.drafted, kind, draft);
 			if (fixed != null) {
 				if (this.corrected == null) {
 					this.corrected = new TileMask(this.tile);
 				}
-				covered += draw(this.corrected, kind, fixed);
+				covered |= draw(this.corrected, kind, fixed);
 			}
-			if (covered > 0) {
+			if (covered) {
 				this.held.add(new Object[] { draftId, sourceId, verdict, reason });
 			}
 		}
 
-		private int draw(TileMask mask, FeatureKind kind, Geometry geometry) {
+		private boolean draw(TileMask mask, FeatureKind kind, Geometry geometry) {
 			return (kind == FeatureKind.ROAD) ? mask.addRoad(geometry, TrainingSetWriter.this.spec.roadWidthMetres())
 					: mask.addArea(geometry);
 		}
