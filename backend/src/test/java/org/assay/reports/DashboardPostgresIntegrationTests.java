@@ -1,0 +1,33 @@
+package org.assay.reports;
+
+import org.assay.support.PostgresDatabase;
+import org.junit.jupiter.api.AfterAll;
+
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.context.annotation.Import;
+import org.springframework.test.annotation.DirtiesContext;
+import org.springframework.test.context.DynamicPropertyRegistry;
+import org.springframework.test.context.DynamicPropertySource;
+
+/**
+ * The lead's dashboard on a real PostgreSQL server, in a database of its own.
+ */
+@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
+@Import(DashboardScenarios.Time.class)
+@DirtiesContext(classMode = DirtiesContext.ClassMode.AFTER_CLASS)
+class DashboardPostgresIntegrationTests extends DashboardScenarios {
+
+	private static PostgresDatabase database;
+
+	@DynamicPropertySource
+	static void postgres(DynamicPropertyRegistry registry) {
+		database = PostgresDatabase.create();
+		database.register(registry);
+	}
+
+	@AfterAll
+	static void drop() {
+		database.drop();
+	}
+
+}
