@@ -1,0 +1,101 @@
+// Verdicts given while the server cannot be reached wait here, in localStorage, and are sent in
+// the order given when it answers again. Each keeps the id it was made with: the server stores a
+// verdict once per id and answers a repeat with what it stored, so a verdict sent twice (its
+// answer lost on the way) is still counted once.
+
+import { ApiError, NetworkError, putVerdict } from './api.js';
+
+const KEY = 'assay.outbox.v1';
+const RETRY_MS = 4000;
+
+function load() {
+  try {
+    const entries = JSON.parse(localStorage.getItem(KEY) || '[]');
+    return Array.isArray(entries) ? entries : [];
+  } catch {
+    return [];
+  }
+}
+
+const transient = (e) => e instanceof NetworkError || (e instanceof ApiError && [502, 503, 504].includes(e.status));
+
+export class Outbox {
+  /**
+   * `handlers`: {sent(entry, answer), refused(entry, error), changed(count)}. An entry is
+   * {id, cellId, body, before}: the verdict's id, its cell, the request body, and the draft's
+   * verdict before it (shown again if the verdict is taken back before it was sent).
+   */
+  constructor(handlers) {
+    this.handlers = handlers;
+    this.sending = null;
+    this.timer = null;
+    window.addEventListener('online', () => this.flush());
+    window.addEventListener('storage', (e) => e.key === KEY && this.handlers.changed(this.count));
+  }
+
+  get entries() {
+    return load();
+  }
+
+  get count() {
+    return load().length;
+  }
+
+  inCell(cellId) {
+    return load().filter((e) => e.cellId === cellId);
+  }
+
+  save(entries) {
+    localStorage.setItem(KEY, JSON.stringify(entries));
+    this.handlers.changed(entries.length);
+    this.schedule();
+  }
+
+  add(entry) {
+    this.save([...load().filter((e) => e.id !== entry.id), entry]);
+  }
+
+  /** Takes an unsent verdict back; returns it, or null when it was not waiting here. */
+  take(id) {
+    const entries = load();
+    const found = entries.find((e) => e.id === id) || null;
+    if (found) this.save(entries.filter((e) => e.id !== id));
+    return found;
+  }
+
+  schedule() {
+    clearTimeout(this.timer);
+    if (load().length > 0) this.timer = setTimeout(() => this.flush(), RETRY_MS);
+  }
+
+  /** Sends the waiting verdicts in order; stops at the first that finds no server. */
+  flush() {
+    if (!this.sending) {
+      this.sending = this.send().finally(() => {
+        this.sending = null;
+        this.schedule();
+      });
+    }
+    return this.sending;
+  }
+
+  async send() {
+    for (let entry = load()[0]; entry; entry = load()[0]) {
+      try {
+        const answer = await putVerdict(entry.id, entry.body, { retries: 0 });
+        this.drop(entry.id);
+        this.handlers.sent(entry, answer);
+      } catch (e) {
+        if (transient(e)) return;
+        this.drop(entry.id);
+        this.handlers.refused(entry, e);
+      }
+    }
+  }
+
+  drop(id) {
+    const entries = load().filter((e) => e.id !== id);
+    localStorage.setItem(KEY, JSON.stringify(entries));
+    this.handlers.changed(entries.length);
+  }
+}
