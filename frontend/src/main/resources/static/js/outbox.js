@@ -5,59 +5,61 @@
 
 import { ApiError, NetworkError, putVerdict } from './api.js';
 
-const KEY = 'assay.outbox.v1';
+const KEY = 'assay.outbox.v1.'; // and the username: one outbox per person on a shared browser
 const RETRY_MS = 4000;
 
-function load() {
-  try {
-    const entries = JSON.parse(localStorage.getItem(KEY) || '[]');
-    return Array.isArray(entries) ? entries : [];
-  } catch {
-    return [];
-  }
-}
 
 const transient = (e) => e instanceof NetworkError || (e instanceof ApiError && [502, 503, 504].includes(e.status));
 
 export class Outbox {
   /**
-   * `handlers`: {sent(entry, answer), refused(entry, error), changed(count)}. An entry is
+   * The outbox of `username`. `handlers`: {sent(entry, answer), refused(entry, error), changed(count)}. An entry is
    * {id, cellId, body, before}: the verdict's id, its cell, the request body, and the draft's
    * verdict before it (shown again if the verdict is taken back before it was sent).
    */
-  constructor(handlers) {
+  constructor(username, handlers) {
+    this.key = KEY + username;
     this.handlers = handlers;
     this.sending = null;
     this.timer = null;
     window.addEventListener('online', () => this.flush());
-    window.addEventListener('storage', (e) => e.key === KEY && this.handlers.changed(this.count));
+    window.addEventListener('storage', (e) => e.key === this.key && this.handlers.changed(this.count));
+  }
+
+  load() {
+    try {
+      const entries = JSON.parse(localStorage.getItem(this.key) || '[]');
+      return Array.isArray(entries) ? entries : [];
+    } catch {
+      return [];
+    }
   }
 
   get entries() {
-    return load();
+    return this.load();
   }
 
   get count() {
-    return load().length;
+    return this.load().length;
   }
 
   inCell(cellId) {
-    return load().filter((e) => e.cellId === cellId);
+    return this.load().filter((e) => e.cellId === cellId);
   }
 
   save(entries) {
-    localStorage.setItem(KEY, JSON.stringify(entries));
+    localStorage.setItem(this.key, JSON.stringify(entries));
     this.handlers.changed(entries.length);
     this.schedule();
   }
 
   add(entry) {
-    this.save([...load().filter((e) => e.id !== entry.id), entry]);
+    this.save([...this.load().filter((e) => e.id !== entry.id), entry]);
   }
 
   /** Takes an unsent verdict back; returns it, or null when it was not waiting here. */
   take(id) {
-    const entries = load();
+    const entries = this.load();
     const found = entries.find((e) => e.id === id) || null;
     if (found) this.save(entries.filter((e) => e.id !== id));
     return found;
@@ -65,7 +67,7 @@ export class Outbox {
 
   schedule() {
     clearTimeout(this.timer);
-    if (load().length > 0) this.timer = setTimeout(() => this.flush(), RETRY_MS);
+    if (this.load().length > 0) this.timer = setTimeout(() => this.flush(), RETRY_MS);
   }
 
   /** Sends the waiting verdicts in order; stops at the first that finds no server. */
@@ -80,7 +82,7 @@ export class Outbox {
   }
 
   async send() {
-    for (let entry = load()[0]; entry; entry = load()[0]) {
+    for (let entry = this.load()[0]; entry; entry = this.load()[0]) {
       try {
         const answer = await putVerdict(entry.id, entry.body, { retries: 0 });
         this.drop(entry.id);
@@ -94,8 +96,8 @@ export class Outbox {
   }
 
   drop(id) {
-    const entries = load().filter((e) => e.id !== id);
-    localStorage.setItem(KEY, JSON.stringify(entries));
+    const entries = this.load().filter((e) => e.id !== id);
+    localStorage.setItem(this.key, JSON.stringify(entries));
     this.handlers.changed(entries.length);
   }
 }

@@ -75,6 +75,27 @@ class WorkspaceBrowserTests {
 
 		decide(1, "a");
 
+		// the imagery fades in steps and gives way to a plain background to compare
+		this.browser.press("[", "[");
+		assertThat(text("imagery-opacity-value")).isEqualTo("80 %");
+		assertThat(this.browser
+			.script("return document.querySelector('#map .leaflet-tile-pane .leaflet-layer').style.opacity"))
+			.isEqualTo("0.8");
+		this.browser.press("b");
+		assertThat(this.browser.driver().findElement(By.id("plain-background")).isSelected()).isTrue();
+		assertThat(this.browser.driver().findElements(By.cssSelector("#map .leaflet-tile-pane .leaflet-layer")))
+			.isEmpty();
+		assertThat(this.browser.driver().findElement(By.id("map")).getDomAttribute("class")).contains("map-plain");
+		this.browser.press("b", "]");
+		assertThat(text("imagery-opacity-value")).isEqualTo("90 %");
+		assertThat(this.browser.driver().findElements(By.cssSelector("#map .leaflet-tile-pane .leaflet-layer")))
+			.hasSize(1);
+		this.browser.press("?");
+		String help = this.browser.visible(By.id("help-list")).getText();
+		assertThat(help).contains("Backspace", "Ctrl+Z", "Take back your last verdict", "[", "]", "plain background");
+		this.browser.press(Keys.ESCAPE);
+		this.browser.await((driver) -> !driver.findElement(By.id("help")).isDisplayed());
+
 		// amend: the editing plugin's vertex handles; drag one a little
 		String amended = text("draft-source");
 		this.browser.press("m");

@@ -215,6 +215,17 @@ public final class Browser implements BeforeEachCallback, AfterTestExecutionCall
 	}
 
 	/**
+	 * Runs an asynchronous script in the page: it calls its last argument with the
+	 * result.
+	 * @param script the script's body
+	 * @param args its arguments
+	 * @return what it passed on
+	 */
+	public Object async(String script, Object... args) {
+		return this.driver.executeAsyncScript(script, args);
+	}
+
+	/**
 	 * Saves a screenshot of the window.
 	 * @param file a PNG file
 	 * @return the file
