@@ -102,8 +102,8 @@ class AmendToolBrowserTests {
 		assertThat(parts.get(0).get(1)).as("split at the middle vertex").isEqualTo(parts.get(1).get(0));
 		assertThat(parts.get(1).get(1).get(0).asDouble()).isCloseTo(was.get(2).get(0).asDouble(), within(1e-7));
 
-		// Ctrl held down while z is pressed (a chord string sends Ctrl and z one after
-		// the other)
+		// Ctrl held down while z is pressed; sent as a chord string, Ctrl+Z did not reach
+		// the page's handler in headless Chromium
 		new Actions(this.browser.driver()).keyDown(Keys.CONTROL).sendKeys("z").keyUp(Keys.CONTROL).perform();
 		this.browser.await((driver) -> text("review-status").startsWith("Took back Amend"));
 		assertThat(draft(validator, cellId, "r-0").get("properties").get("verdict").isNull()).isTrue();
