@@ -124,7 +124,7 @@ export class Decision {
     } catch (e) {
       if (e instanceof NetworkError || (e instanceof ApiError && [502, 503, 504].includes(e.status))) {
         this.busy = false;
-        this.keep(draft, body, id);
+        this.keep(draft, body, id, true);
         return undefined;
       }
       panel.status(e.message, 'error');
@@ -136,9 +136,10 @@ export class Decision {
   }
 
   /** The server cannot be reached: keep the verdict on this device, show it, and move on. */
-  keep(draft, body, id) {
+  keep(draft, body, id, tried = false) {
     const { review, outbox, username } = this.c;
-    outbox.add({ id, cellId: review.cell.id, body, before: draft.properties.verdict || null });
+    // tried: the request may have reached the server although no answer came back
+    outbox.add({ id, cellId: review.cell.id, body, before: draft.properties.verdict || null, tried });
     review.kept(draft, body, id, username);
     this.pending = null;
     this.done(draft, body, null, `Kept on this device: ${STATES[body.verdict].verb}. It is sent when the server answers.`);

@@ -37,7 +37,7 @@ async function load() {
   layers = createLayers(map, pick, describe);
   layers.setReference(reference);
   outbox = new Outbox(me.username, { sent, refused, changed: (count) => panel.showPending(count) });
-  for (const entry of outbox.inCell(cell.id)) {
+  for (const entry of outbox.verdictsIn(cell.id)) {
     const draft = review.byId(entry.body.draftId);
     if (draft) review.kept(draft, entry.body, entry.id, me.username);
   }
@@ -47,6 +47,7 @@ async function load() {
 
 /** A kept verdict reached the server. */
 function sent(entry, answer) {
+  if (entry.withdraw) return; // the page already shows the draft as it was before
   const draft = entry.cellId === review.cell.id ? review.byId(entry.body.draftId) : null;
   if (!draft || draft.properties.verdict?.id !== entry.id) return;
   review.recorded(draft, entry.body, answer, me.username);
@@ -58,6 +59,10 @@ function sent(entry, answer) {
 
 /** The server refused a kept verdict (the claim lapsed, the draft was ruled): show what stands. */
 function refused(entry, error) {
+  if (entry.withdraw) {
+    panel.status(`An undo kept on this device was refused: ${error.message} Reload the page to see what stands.`, 'error');
+    return;
+  }
   const draft = entry.cellId === review.cell.id ? review.byId(entry.body.draftId) : null;
   if (draft && draft.properties.verdict?.id === entry.id) {
     review.restore(draft, entry.before);
@@ -72,13 +77,15 @@ function refused(entry, error) {
 async function undo() {
   if (decision.busy || undoing) return;
   decision.drop();
-  const waiting = outbox.inCell(review.cell.id);
+  const waiting = outbox.verdictsIn(review.cell.id);
   if (waiting.length > 0) {
     const entry = waiting[waiting.length - 1];
     outbox.take(entry.id);
     const draft = review.byId(entry.body.draftId);
     review.restore(draft, entry.before);
-    undone(draft, `Took back ${STATES[entry.body.verdict].verb} before it was sent.`);
+    const verb = STATES[entry.body.verdict].verb;
+    undone(draft, entry.tried ? `Took back ${verb}; if it reached the server, it is withdrawn there once the server answers.`
+      : `Took back ${verb} before it was sent.`);
     return;
   }
   const draft = review.latestOf(me.username);

@@ -5,7 +5,6 @@ import java.time.Instant;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
 import java.time.temporal.ChronoUnit;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -15,7 +14,6 @@ import org.assay.queue.CellView;
 import org.assay.queue.QueueService;
 
 import org.springframework.format.annotation.DateTimeFormat;
-import org.springframework.jdbc.core.JdbcTemplate;
 import org.springframework.transaction.annotation.Transactional;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.RequestParam;
@@ -28,7 +26,7 @@ import org.springframework.web.bind.annotation.RestController;
 @RestController
 class MyProgressController {
 
-	private final JdbcTemplate jdbc;
+	private final OwnProgress own;
 
 	private final QueueService queue;
 
@@ -36,8 +34,8 @@ class MyProgressController {
 
 	private final Clock clock;
 
-	MyProgressController(JdbcTemplate jdbc, QueueService queue, AccountService accounts, Clock clock) {
-		this.jdbc = jdbc;
+	MyProgressController(OwnProgress own, QueueService queue, AccountService accounts, Clock clock) {
+		this.own = own;
 		this.queue = queue;
 		this.accounts = accounts;
 		this.clock = clock;
@@ -69,28 +67,10 @@ class MyProgressController {
 		Account me = this.accounts.current();
 		OffsetDateTime from = (since != null) ? since
 				: this.clock.instant().truncatedTo(ChronoUnit.DAYS).atOffset(ZoneOffset.UTC);
-		Map<String, Integer> verdicts = new LinkedHashMap<>();
-		for (Verdict verdict : Verdict.values()) {
-			verdicts.put(verdict.name(), 0);
-		}
-		this.jdbc.query("select verdict, count(*) from pass_verdict where validator_id = ? and decided_at >= ?"
-				+ " and review_pass in (1, 2) group by verdict", (rs) -> {
-					verdicts.put(rs.getString(1), rs.getInt(2));
-				}, me.id(), from);
-		int withdrawn = count("select count(*) from verdict_withdrawal where withdrawn_by = ? and withdrawn_at >= ?",
-				me.id(), from);
-		int finished = count(
-				"select count(*) from cell c where c.finished_at >= ? and exists (select 1 from"
-						+ " pass_verdict p where p.cell_id = c.id and p.review_pass = 1 and p.validator_id = ?)",
-				from, me.id())
-				+ count("select count(*) from second_pass where validator_id = ? and finished_at >= ?", me.id(), from);
+		Map<String, Integer> verdicts = this.own.verdicts(me.id(), from);
 		int decided = verdicts.values().stream().mapToInt(Integer::intValue).sum();
-		return new MyProgress(from.toInstant(), verdicts, decided, withdrawn, finished, this.queue.mine(me));
-	}
-
-	private int count(String sql, Object... args) {
-		Integer n = this.jdbc.queryForObject(sql, Integer.class, args);
-		return (n != null) ? n : 0;
+		return new MyProgress(from.toInstant(), verdicts, decided, this.own.withdrawn(me.id(), from),
+				this.own.cellsFinished(me.id(), from), this.queue.mine(me));
 	}
 
 }

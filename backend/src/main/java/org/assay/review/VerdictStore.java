@@ -2,6 +2,7 @@ package org.assay.review;
 
 import java.sql.ResultSet;
 import java.sql.SQLException;
+import java.time.Instant;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
 import java.util.List;
@@ -121,7 +122,7 @@ class VerdictStore {
 			.findFirst();
 	}
 
-	void markWithdrawn(UUID id, long validatorId, java.time.Instant at) {
+	void markWithdrawn(UUID id, long validatorId, Instant at) {
 		this.jdbc.update("insert into verdict_withdrawal (verdict_id, withdrawn_by, withdrawn_at) values (?, ?, ?)", id,
 				validatorId, at.atOffset(ZoneOffset.UTC));
 	}

@@ -40,9 +40,9 @@ import static org.assertj.core.api.Assertions.assertThat;
  * {@code assay:first-draft} mark, two animation frames after it is drawn); the cell is
  * released between openings. Then {@value #ADVANCES} presses of {@code n} (next draft),
  * each timed in the page from the key event's time stamp to two animation frames later,
- * which is when the next draft is on screen. Times are the browser's clock; headless
- * Chromium paints at 60 frames a second, so a frame is about 16.7 ms and no advance can
- * take less than about two frames.
+ * by when the frame that shows the next draft has been painted. Times are the browser's
+ * clock. Headless Chromium schedules its frames on its own, so the frame part of a figure
+ * is not what a screen at 60 Hz would give: compare figures of runs on the same machine.
  */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
 class WorkspaceBenchmark {

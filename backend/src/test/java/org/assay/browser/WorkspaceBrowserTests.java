@@ -61,6 +61,9 @@ class WorkspaceBrowserTests {
 	void aValidatorWorksACellWithKeysAmendsUndoesWorksOfflineAndEveryVerdictArrivesOnce() {
 		this.browser.allowConsoleError(SIGNED_OUT_PROBE);
 		this.browser.allowConsoleError(OFFLINE);
+		// the withdrawal of a kept verdict the server never stored
+		this.browser
+			.allowConsoleError("/withdrawal - Failed to load resource: the server responded with a status of 404");
 		signIn(VALIDATOR, PASSWORD);
 		this.browser.await(ExpectedConditions.urlMatches("/index\\.html$"));
 		assertThat(this.browser.visible(By.id("today-figures")).getText()).contains("Drafts decided today");
@@ -124,6 +127,20 @@ class WorkspaceBrowserTests {
 		assertThat(text("review-status")).startsWith("Kept on this device");
 		decide(5, "a");
 		assertThat(text("pending")).isEqualTo("2 pending");
+		// taking back kept verdicts: the one never sent simply goes; the one whose
+		// request
+		// failed may have reached the server, so its withdrawal waits in its place
+		this.browser.press(Keys.BACK_SPACE);
+		this.browser.await((driver) -> text("cell-progress").startsWith("4 / "));
+		assertThat(text("review-status")).isEqualTo("Took back Accept before it was sent.");
+		assertThat(text("pending")).isEqualTo("1 pending");
+		this.browser.press(Keys.BACK_SPACE);
+		this.browser.await((driver) -> text("cell-progress").startsWith("3 / "));
+		assertThat(text("review-status")).startsWith("Took back Accept; if it reached the server");
+		assertThat(text("pending")).as("the withdrawal of the first").isEqualTo("1 pending");
+		decide(4, "a");
+		decide(5, "a");
+		assertThat(text("pending")).isEqualTo("3 pending");
 		assertThat(storedIn(cellId)).as("nothing reached the server while offline").isEqualTo(4);
 		this.browser.offline(false);
 		this.browser.await((driver) -> !this.browser.driver().findElement(By.id("pending")).isDisplayed());
