@@ -39,6 +39,8 @@ function listAt(g, path) {
 }
 
 // The vertex markers of the layer being edited, each with its part and position in the part.
+// geoman keeps them in `layer.pm._markers`, nested like the coordinates: not its public API,
+// checked against 2.20.2 (AmendToolBrowserTests fails if a new version changes it).
 function vertexMarkers(markers, path = []) {
   if (!Array.isArray(markers)) return [];
   return markers.flatMap((m, i) => (Array.isArray(m) ? vertexMarkers(m, [...path, i]) : [{ marker: m, path: [...path, i] }]));
@@ -53,7 +55,7 @@ export function startAmend(map, geometry, onChange, { roadEnds = () => [], say =
   configure();
   let shape = structuredClone(geometry);
   let layer = null;
-  let focused = null; // {path} of the vertex that has the keyboard focus
+  let focused = null; // {marker} of the vertex that last had the keyboard focus
 
   const read = () => {
     const g = layer.toGeoJSON(DECIMALS).geometry;
@@ -62,17 +64,22 @@ export function startAmend(map, geometry, onChange, { roadEnds = () => [], say =
   };
   const changed = () => onChange(read());
 
+  // where a vertex marker is now: adding a vertex shifts the later ones' positions
+  const pathOf = (marker) => vertexMarkers(layer.pm._markers).find((v) => v.marker === marker)?.path || null;
+
   function label() {
     const all = vertexMarkers(layer.pm._markers);
-    all.forEach(({ marker, path }, n) => {
+    const tail = isLine(shape) ? ', s splits the line here' : '';
+    all.forEach(({ marker }, n) => {
       const icon = marker.getElement();
-      if (!icon || icon.dataset.wired) return;
+      if (!icon) return;
+      icon.setAttribute('aria-label', `Vertex ${n + 1} of ${all.length}. Arrow keys move it, Delete removes it${tail}.`);
+      if (icon.dataset.wired) return;
       icon.dataset.wired = 'true';
-      icon.setAttribute('aria-label', `Vertex ${n + 1} of ${all.length}. Arrow keys move it, Delete removes it${isLine(shape) ? ', s splits the line here' : ''}.`);
       icon.addEventListener('focus', () => {
-        focused = { path };
+        focused = { marker };
       });
-      icon.addEventListener('keydown', (e) => onVertexKey(e, marker, path));
+      icon.addEventListener('keydown', (e) => onVertexKey(e, marker));
     });
   }
 
@@ -114,11 +121,12 @@ export function startAmend(map, geometry, onChange, { roadEnds = () => [], say =
   /** Splits a line in two at the focused vertex; a split part keeps the vertex at its end. */
   function split() {
     if (!isLine(shape)) return say('Only a line can be split.', 'error');
-    if (!focused) return say('Focus a vertex first (Tab to it), then press s.', 'error');
+    const path = focused && pathOf(focused.marker);
+    if (!path) return say('Focus a vertex first (Tab to it), then press s.', 'error');
     read();
     const list = parts(shape).map((p) => p.slice());
-    const part = shape.type === 'LineString' ? 0 : focused.path[0];
-    const i = focused.path[focused.path.length - 1];
+    const part = shape.type === 'LineString' ? 0 : path[0];
+    const i = path[path.length - 1];
     const coords = list[part];
     if (i <= 0 || i >= coords.length - 1) return say('A line splits at an inner vertex, not at its end.', 'error');
     list.splice(part, 1, coords.slice(0, i + 1), coords.slice(i));
@@ -150,17 +158,18 @@ export function startAmend(map, geometry, onChange, { roadEnds = () => [], say =
     return undefined;
   }
 
-  function onVertexKey(event, marker, path) {
+  function onVertexKey(event, marker) {
     if (event.key === 'Delete') {
       event.preventDefault();
       event.stopPropagation();
-      remove(path);
+      const path = pathOf(marker);
+      if (path) remove(path);
       return;
     }
     if (event.key === 's' && !event.ctrlKey && !event.metaKey) {
       event.preventDefault();
       event.stopPropagation();
-      focused = { path };
+      focused = { marker };
       split();
       return;
     }
