@@ -290,9 +290,8 @@ public class QueueService {
 			}
 		}
 		else if (!complete && cell.finished()) {
-			// a withdrawn verdict opened the cell again; its holder keeps it, and a
-			// second
-			// pass that nobody has taken waits for the cell to finish again
+			// a withdrawn verdict opened the cell again: its holder keeps it, and a
+			// second pass that nobody has taken waits until it is finished again
 			this.jdbc.update("update cell set finished_at = null where id = ?", cellId);
 			this.second.dropUntaken(cellId);
 		}

@@ -77,6 +77,10 @@ class VerdictUndo {
 			return new Outcome(record, standing(record.draftId(), pass), this.queue.progress(record.cellId()), true);
 		}
 		this.queue.requireUndoable(account, record.cellId(), pass);
+		if (this.store.withdrawn(id)) {
+			// the same undo, sent twice at once, waited for the cell's lock behind itself
+			return new Outcome(record, standing(record.draftId(), pass), this.queue.progress(record.cellId()), true);
+		}
 		if (this.cases.ruled(record.draftId())) {
 			throw new ResponseStatusException(HttpStatus.CONFLICT,
 					"Draft " + record.draftId() + " was ruled by a lead; its verdicts stand");
