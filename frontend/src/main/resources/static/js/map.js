@@ -23,9 +23,21 @@ function addImagery(map, template, wrap) {
     maxZoom: 22, maxNativeZoom: IMAGERY_NATIVE_ZOOM, attribution: host ? `Imagery: ${host}` : 'Imagery',
   });
   let failures = 0;
+  let warning = null;
   tiles.on('tileerror', () => {
     failures += 1;
-    if (failures === 4) wrap.append(notice('Some imagery tiles could not be loaded.'));
+    if (failures === 4) {
+      warning = notice('Some imagery tiles could not be loaded.');
+      wrap.append(warning);
+    }
+  });
+  // tiles that failed while the connection was lost are fetched again when it is back
+  window.addEventListener('online', () => {
+    if (failures === 0) return;
+    failures = 0;
+    warning?.remove();
+    warning = null;
+    tiles.redraw();
   });
   tiles.addTo(map);
   return tiles;

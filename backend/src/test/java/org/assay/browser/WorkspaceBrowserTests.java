@@ -67,6 +67,7 @@ class WorkspaceBrowserTests {
 		signIn(VALIDATOR, PASSWORD);
 		this.browser.await(ExpectedConditions.urlMatches("/index\\.html$"));
 		assertThat(this.browser.visible(By.id("today-figures")).getText()).contains("Drafts decided today");
+		this.browser.screenshot(SCREENSHOT.resolveSibling("home.png"));
 		this.browser.visible(By.id("take-next-any")).click();
 
 		this.browser.await(ExpectedConditions.urlMatches("/work\\.html\\?cell=\\d+$"));
@@ -150,6 +151,7 @@ class WorkspaceBrowserTests {
 			decide(decided + 1, "a");
 		}
 		this.browser.visible(By.id("finished"));
+		this.browser.screenshot(SCREENSHOT.resolveSibling("workspace-finished.png"));
 
 		ApiClient api = ApiClient.signIn(this.port, VALIDATOR, PASSWORD);
 		List<JsonNode> drafts = new ArrayList<>();
