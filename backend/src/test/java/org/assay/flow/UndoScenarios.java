@@ -178,6 +178,23 @@ abstract class UndoScenarios {
 		give(this.second, blind.get(blind.size() - 1), "ACCEPT", null);
 		assertThat(rulings(batchId)).isEqualTo(1);
 		assertThat(this.second.get("/api/my/progress").json().get("cellsFinished").asInt()).isEqualTo(1);
+
+		// a changed mind on the disputed draft, then the lead's ruling: that verdict
+		// stands
+		UUID changed = give(this.second, drafts.get(0), "REJECT", "not-a-feature");
+		assertThat(rulings(batchId)).as("the passes agree now").isZero();
+		give(this.second, drafts.get(0), "ACCEPT", null);
+		assertThat(rulings(batchId)).isEqualTo(1);
+		ApiClient.Response ruled = this.lead.put("/api/rulings/" + UUID.randomUUID(),
+				Map.of("draftId", drafts.get(0).get("id").asLong(), "verdict", "ACCEPT", "comment", "ruled"));
+		assertThat(ruled.status()).as(ruled.text()).isEqualTo(201);
+		UUID latest = this.jdbc.queryForObject(
+				"select verdict_id from pass_verdict where draft_id = ? and review_pass = 2", UUID.class,
+				drafts.get(0).get("id").asLong());
+		assertThat(latest).isNotEqualTo(changed);
+		ApiClient.Response refused = withdraw(this.second, latest);
+		assertThat(refused.status()).as("a ruled draft's verdicts stand").isEqualTo(409);
+		assertThat(refused.text()).contains("ruled");
 	}
 
 	private long upload(String share) {
