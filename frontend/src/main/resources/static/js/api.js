@@ -111,14 +111,15 @@ const transient = (e) => e instanceof NetworkError || (e instanceof ApiError && 
 
 /**
  * Records a verdict under the caller's id. The id makes the request safe to repeat, so it is
- * retried (up to three times, with growing pauses) when the answer is lost on the way.
+ * retried (up to `retries` times, three unless told, with growing pauses) when the answer is
+ * lost on the way.
  */
-export async function putVerdict(id, body) {
+export async function putVerdict(id, body, { retries = VERDICT_RETRIES } = {}) {
   for (let attempt = 0; ; attempt++) {
     try {
       return await request('PUT', 'api/verdicts/' + encodeURIComponent(id), { json: body });
     } catch (e) {
-      if (!transient(e) || attempt >= VERDICT_RETRIES) throw e;
+      if (!transient(e) || attempt >= retries) throw e;
       await pause(500 * 2 ** attempt);
     }
   }

@@ -76,11 +76,44 @@ function cellItem(cell, batchesById, me) {
       cell.finished ? 'Open' : 'Resume', el('span', { className: 'visually-hidden' }, ` cell ${cellNumber(cell)}`)));
 }
 
+const VERDICT_WORDS = [['ACCEPT', 'Accepted'], ['AMEND', 'Amended'], ['REJECT', 'Rejected'], ['ESCALATE', 'Escalated']];
+
+/** The validator's own figures since local midnight, and the quickest way back to work. */
+function showToday(progress, batches, me) {
+  const figure = (term, value) => [el('div', {}, el('dt', {}, term), el('dd', {}, number.format(value)))];
+  byId('today-figures').replaceChildren(
+    ...figure('Drafts decided today', progress.decided),
+    ...VERDICT_WORDS.flatMap(([key, word]) => figure(word, progress.verdicts[key] || 0)),
+    ...figure('Cells finished today', progress.cellsFinished),
+    ...figure('Verdicts taken back', progress.withdrawn));
+  const held = progress.cells.find((c) => c.holder === me.username && !c.finished) || progress.cells[0];
+  const resume = byId('resume');
+  resume.hidden = !held;
+  if (held) {
+    resume.href = `work.html?cell=${encodeURIComponent(held.id)}`;
+    resume.textContent = `Resume cell ${cellNumber(held)}${held.pass === 2 ? ' (second review)' : ''}`;
+  }
+  const open = batches.find((b) => b.state === 'OPEN');
+  const take = byId('take-next-any');
+  take.hidden = !open || Boolean(held);
+  if (open) {
+    take.onclick = () => takeNextCell(open, take, byId('today-status'));
+    take.textContent = `Take next cell of ${open.name}`;
+  }
+}
+
 async function start() {
   const status = byId('home-status');
   try {
     const me = await showSignedIn();
-    const [batches, cells] = await Promise.all([get('api/batches'), get('api/my/cells')]);
+    const midnight = new Date();
+    midnight.setHours(0, 0, 0, 0);
+    const [batches, progress] = await Promise.all([
+      get('api/batches'),
+      get(`api/my/progress?since=${encodeURIComponent(midnight.toISOString())}`),
+    ]);
+    const cells = progress.cells;
+    showToday(progress, batches, me);
     const batchesById = new Map(batches.map((b) => [b.id, b]));
     byId('my-cells').replaceChildren(...cells.map((c) => cellItem(c, batchesById, me)));
     byId('my-cells-empty').hidden = cells.length > 0;

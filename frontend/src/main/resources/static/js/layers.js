@@ -44,9 +44,10 @@ function group(map, pane, style, extra = {}) {
  */
 export function createLayers(map, onPick, describe) {
   const refCasing = group(map, 'reference', (f) => referenceStyle('casing', f), { interactive: false });
-  const refLine = group(map, 'reference', (f) => referenceStyle('line', f), { interactive: false });
+  // snapIgnore: false makes a layer a snap target for the amend tool (amend.js opts layers in)
+  const refLine = group(map, 'reference', (f) => referenceStyle('line', f), { interactive: false, snapIgnore: false });
   const casings = group(map, 'draftCasing', draftCasing, { interactive: false });
-  const lines = group(map, 'draft', (f) => draftLine(stateOf(f), f.properties.kind));
+  const lines = group(map, 'draft', (f) => draftLine(stateOf(f), f.properties.kind), { snapIgnore: false });
   const current = ['halo', 'currentCasing', 'current'].map((pane) => group(map, pane, () => ({}), { interactive: false }));
   const flagPoints = L.layerGroup().addTo(map);
   const byId = new Map(); // draft id -> {casing, line}
@@ -62,7 +63,10 @@ export function createLayers(map, onPick, describe) {
       L.DomEvent.stop(e);
       onPick(feature.id);
     });
-    if (feature.id === currentId) [entry.casing, entry.line].forEach((l) => l.setStyle(hidden));
+    if (feature.id === currentId) {
+      [entry.casing, entry.line].forEach((l) => l.setStyle(hidden));
+      entry.line.options.snapIgnore = true; // never snap a draft to its own old shape
+    }
     byId.set(feature.id, entry);
   }
 
@@ -109,16 +113,31 @@ export function createLayers(map, onPick, describe) {
       const before = byId.get(currentId);
       currentId = feature.id;
       if (before) {
+        before.line.options.snapIgnore = false;
         before.casing.setStyle(draftCasing());
         before.line.setStyle(draftLine(stateOf(before.line.feature), before.line.feature.properties.kind));
       }
       const entry = byId.get(feature.id);
-      if (entry) [entry.casing, entry.line].forEach((l) => l.setStyle(hidden));
+      if (entry) {
+        [entry.casing, entry.line].forEach((l) => l.setStyle(hidden));
+        entry.line.options.snapIgnore = true;
+      }
       drawCurrent(feature, shownGeometry(feature));
     },
     /** Redraws the current draft with a geometry being edited. */
     setCurrentGeometry(geometry) {
       current.forEach((g) => g.eachLayer((l) => l.setLatLngs(latLngsOf(geometry))));
+    },
+    /** The [lng, lat] ends of the roads other than draft `exceptId`: drafts as shown, and the reference layer. */
+    roadEnds(exceptId) {
+      const ends = [];
+      const add = (geometry) => {
+        if (geometry?.type === 'LineString') ends.push(geometry.coordinates[0], geometry.coordinates.at(-1));
+        else if (geometry?.type === 'MultiLineString') geometry.coordinates.forEach((c) => ends.push(c[0], c.at(-1)));
+      };
+      lines.eachLayer((l) => l.feature.id !== exceptId && add(shownGeometry(l.feature)));
+      refLine.eachLayer((l) => add(l.feature.geometry));
+      return ends;
     },
     showDrafts(visible) {
       [casings, lines].forEach((g) => (visible ? g.addTo(map) : g.remove()));

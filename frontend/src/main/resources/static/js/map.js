@@ -23,11 +23,44 @@ function addImagery(map, template, wrap) {
     maxZoom: 22, maxNativeZoom: IMAGERY_NATIVE_ZOOM, attribution: host ? `Imagery: ${host}` : 'Imagery',
   });
   let failures = 0;
+  let warning = null;
   tiles.on('tileerror', () => {
     failures += 1;
-    if (failures === 4) wrap.append(notice('Some imagery tiles could not be loaded.'));
+    if (failures === 4) {
+      warning = notice('Some imagery tiles could not be loaded.');
+      wrap.append(warning);
+    }
+  });
+  // tiles that failed while the connection was lost are fetched again when it is back
+  window.addEventListener('online', () => {
+    if (failures === 0) return;
+    failures = 0;
+    warning?.remove();
+    warning = null;
+    tiles.redraw();
   });
   tiles.addTo(map);
+  return tiles;
+}
+
+const imagery = new WeakMap(); // map -> {tiles, container}
+
+/** Sets the imagery's opacity (0..1); returns false when the map has no imagery. */
+export function setImageryOpacity(map, opacity) {
+  const entry = imagery.get(map);
+  if (!entry) return false;
+  entry.tiles.setOpacity(opacity);
+  return true;
+}
+
+/** Shows a plain background instead of the imagery (to compare), or the imagery again. */
+export function showPlainBackground(map, plain) {
+  const entry = imagery.get(map);
+  if (!entry) return false;
+  if (plain) entry.tiles.remove();
+  else entry.tiles.addTo(map);
+  entry.container.classList.toggle('map-plain', plain);
+  return true;
 }
 
 function notice(text) {
@@ -46,7 +79,7 @@ export function createMap(container, { imageryUrl, cellBbox }) {
   });
   const wrap = container.parentElement;
   if (imageryUrl) {
-    addImagery(map, imageryUrl, wrap);
+    imagery.set(map, { tiles: addImagery(map, imageryUrl, wrap), container });
   } else {
     container.classList.add('map-plain');
     wrap.append(notice('This batch has no imagery'));

@@ -23,12 +23,25 @@ export function buildVerdictButtons(onChoose) {
 export function showCell(review, batch) {
   const cell = review.cell;
   const of = batch ? ` of ${batch.cellCount}` : '';
+  const second = cell.pass === 2;
   byId('cell-title').textContent = `Cell ${cellNumber(cell)}${of}`;
-  document.title = `Cell ${cellNumber(cell)} · ${batch ? batch.name : 'Assay'}`;
+  document.title = `${second ? 'Second review · ' : ''}Cell ${cellNumber(cell)} · ${batch ? batch.name : 'Assay'}`;
+  const pass = byId('cell-pass');
+  pass.hidden = !second;
+  pass.textContent = second ? 'Second review (blind)' : '';
+  pass.title = second ? 'You review this cell again without seeing the first verdicts.' : '';
   byId('cell-batch').textContent = batch ? [batch.name, batch.modelName, batch.modelVersion].filter(Boolean).join(' · ') : '';
   byId('cell-progress').textContent = `${review.decided} / ${review.count} decided`;
   fillBar(byId('cell-bar'), review.decided, review.count);
   byId('finished').hidden = !cell.finished;
+}
+
+/** Says how many verdicts wait on this device for the server. */
+export function showPending(count) {
+  const strip = byId('pending');
+  strip.hidden = count === 0;
+  strip.textContent = count === 0 ? '' : `${count} pending`;
+  strip.title = count === 0 ? '' : 'Kept on this device; sent when the server answers again';
 }
 
 /** Says who holds the cell when that is worth knowing. */

@@ -30,8 +30,43 @@ export class Review {
     return this.drafts.length;
   }
 
+  /** Drafts with a verdict here, counting those kept on this device until they are sent. */
   get decided() {
-    return this.cell.decidedCount ?? this.drafts.filter((d) => d.properties.verdict).length;
+    return this.drafts.filter((d) => d.properties.verdict).length;
+  }
+
+  /** Verdicts waiting on this device for the server. */
+  get pending() {
+    return this.drafts.filter((d) => d.properties.verdict?.pending).length;
+  }
+
+  byId(id) {
+    return this.drafts.find((d) => d.id === id) || null;
+  }
+
+  /** The draft with the latest verdict of `username` that the server has (what an undo takes back). */
+  latestOf(username) {
+    let latest = null;
+    for (const draft of this.drafts) {
+      const v = draft.properties.verdict;
+      if (!v || v.pending || v.validator !== username || !v.id) continue;
+      if (!latest || String(v.createdAt) > String(latest.properties.verdict.createdAt)) latest = draft;
+    }
+    return latest;
+  }
+
+  /** Shows a verdict kept on this device (not yet sent) on the draft. */
+  kept(draft, body, id, username) {
+    draft.properties.verdict = {
+      id, verdict: body.verdict, reasonCode: body.reasonCode, comment: body.comment, validator: username,
+      geometry: body.geometry || null, createdAt: new Date().toISOString(), pending: true,
+    };
+  }
+
+  /** Puts a draft back to a verdict (or none) after an undo; `cell` is the server's progress, if it answered. */
+  restore(draft, verdict, cell = null) {
+    draft.properties.verdict = verdict || null;
+    if (cell) Object.assign(this.cell, { decidedCount: cell.decidedCount, finished: cell.finished });
   }
 
   reasonsFor(verdict) {

@@ -1,14 +1,16 @@
 // The cell page: loads the cell, draws it, and runs the review loop (choose a verdict and a
-// reason, record it, move on). The verdict itself is decision.js; drawing is layers.js and
-// panel.js; keys are keys.js.
+// reason, record it, move on; take the last one back). The verdict itself is decision.js;
+// drawing is layers.js and panel.js; keys are keys.js; verdicts waiting for the server are
+// outbox.js.
 
-import { get, post } from './api.js';
+import { get, NetworkError, post } from './api.js';
 import { Decision } from './decision.js';
 import { byId, say } from './dom.js';
 import { bindKeys, writeHelp } from './keys.js';
 import { boundsOf, createLayers, kindName, shownGeometry } from './layers.js';
 import { addLegend } from './legend.js';
-import { createMap, showCell } from './map.js';
+import { createMap, setImageryOpacity, showCell, showPlainBackground } from './map.js';
+import { Outbox } from './outbox.js';
 import * as panel from './panel.js';
 import { Review } from './review.js';
 import { showSignedIn } from './session.js';
@@ -16,7 +18,8 @@ import { stateOf, STATES } from './styles.js';
 
 const cellId = new URLSearchParams(location.search).get('cell');
 
-let me, batch, review, map, layers, decision;
+let me, batch, review, map, layers, decision, outbox;
+let undoing = false;
 
 async function load() {
   me = await showSignedIn();
@@ -33,8 +36,104 @@ async function load() {
   addLegend(map);
   layers = createLayers(map, pick, describe);
   layers.setReference(reference);
+  outbox = new Outbox(me.username, { sent, refused, changed: (count) => panel.showPending(count) });
+  for (const entry of outbox.verdictsIn(cell.id)) {
+    const draft = review.byId(entry.body.draftId);
+    if (draft) review.kept(draft, entry.body, entry.id, me.username);
+  }
   layers.setDrafts(review.drafts);
-  decision = new Decision({ review, map, layers, username: me.username, reveal, recorded });
+  decision = new Decision({ review, map, layers, outbox, username: me.username, reveal, recorded });
+}
+
+/** A kept verdict reached the server. */
+function sent(entry, answer) {
+  if (entry.withdraw) return; // the page already shows the draft as it was before
+  const draft = entry.cellId === review.cell.id ? review.byId(entry.body.draftId) : null;
+  if (!draft || draft.properties.verdict?.id !== entry.id) return;
+  review.recorded(draft, entry.body, answer, me.username);
+  layers.update(draft);
+  panel.showCell(review, batch);
+  if (draft === review.current) panel.showDraft(review);
+  if (outbox.inCell(review.cell.id).length === 0) panel.status('Every verdict kept on this device is sent.', 'ok');
+}
+
+/** The server refused a kept verdict (the claim lapsed, the draft was ruled): show what stands. */
+function refused(entry, error) {
+  if (entry.withdraw) {
+    panel.status(`An undo kept on this device was refused: ${error.message} Reload the page to see what stands.`, 'error');
+    return;
+  }
+  const draft = entry.cellId === review.cell.id ? review.byId(entry.body.draftId) : null;
+  if (draft && draft.properties.verdict?.id === entry.id) {
+    review.restore(draft, entry.before);
+    layers.update(draft);
+    panel.showCell(review, batch);
+    if (draft === review.current) panel.showDraft(review);
+  }
+  panel.status(`A verdict kept on this device was refused: ${error.message}`, 'error');
+}
+
+/** Takes back the last verdict: one still on this device is simply dropped, else the server withdraws it. */
+async function undo() {
+  if (decision.busy || undoing) return;
+  decision.drop();
+  const waiting = outbox.verdictsIn(review.cell.id);
+  if (waiting.length > 0) {
+    const entry = waiting[waiting.length - 1];
+    outbox.take(entry.id);
+    const draft = review.byId(entry.body.draftId);
+    review.restore(draft, entry.before);
+    const verb = STATES[entry.body.verdict].verb;
+    undone(draft, entry.tried ? `Took back ${verb}; if it reached the server, it is withdrawn there once the server answers.`
+      : `Took back ${verb} before it was sent.`);
+    return;
+  }
+  const draft = review.latestOf(me.username);
+  if (!draft) {
+    panel.status('You have no verdict in this cell to take back.', 'error');
+    return;
+  }
+  const verdict = draft.properties.verdict;
+  undoing = true;
+  panel.status('Taking back…');
+  try {
+    const answer = await post(`api/verdicts/${encodeURIComponent(verdict.id)}/withdrawal`);
+    review.restore(draft, answer.restored, answer.cell);
+    const now = answer.restored ? STATES[answer.restored.verdict].label.toLowerCase() : 'undecided';
+    undone(draft, `Took back ${STATES[verdict.verdict].verb}; the draft is ${now} again.`);
+  } catch (e) {
+    panel.status(e instanceof NetworkError ? 'Undo needs the server; try again when it answers.' : e.message, 'error');
+  } finally {
+    undoing = false;
+  }
+}
+
+function undone(draft, said) {
+  layers.update(draft);
+  review.moveTo(draft.id);
+  select();
+  panel.showCell(review, batch);
+  panel.status(said, 'ok');
+  byId('draft-title').focus();
+}
+
+let opacity = 1;
+function imagery(step) {
+  opacity = Math.min(1, Math.max(0, Math.round((opacity + step * 0.1) * 10) / 10));
+  applyOpacity();
+}
+
+function applyOpacity() {
+  const input = byId('imagery-opacity');
+  const text = `${Math.round(opacity * 100)} %`;
+  input.value = String(Math.round(opacity * 100));
+  input.setAttribute('aria-valuetext', text);
+  byId('imagery-opacity-value').textContent = text;
+  if (!setImageryOpacity(map, opacity)) panel.status('This batch has no imagery.');
+}
+
+function plainBackground(plain) {
+  if (!showPlainBackground(map, plain)) panel.status('This batch has no imagery.');
 }
 
 function describe(feature) {
@@ -132,6 +231,12 @@ function wire() {
   byId('take-next').addEventListener('click', takeNext);
   byId('show-drafts').addEventListener('change', (e) => layers.showDrafts(e.target.checked));
   byId('show-reference').addEventListener('change', (e) => layers.showReference(e.target.checked));
+  byId('plain-background').addEventListener('change', (e) => plainBackground(e.target.checked));
+  byId('imagery-opacity').addEventListener('input', (e) => {
+    opacity = Number(e.target.value) / 100;
+    applyOpacity();
+  });
+  byId('undo').addEventListener('click', undo);
   bindKeys({
     verdict: (verdict, shift) => decision.choose(verdict, !shift),
     reason: (number) => decision.pickNumber(number),
@@ -148,6 +253,12 @@ function wire() {
     toggleDrafts: () => toggle('show-drafts', layers.showDrafts),
     toggleReference: () => toggle('show-reference', layers.showReference),
     help: () => help.showModal(),
+    undo,
+    join: () => decision.edit('join'),
+    split: () => decision.edit('split'),
+    removeVertex: () => panel.status(decision.editor ? 'Tab to a vertex first, then press Delete.' : 'Amend first: press m.'),
+    imagery,
+    plainBackground: () => toggle('plain-background', plainBackground),
   });
 }
 
@@ -168,6 +279,10 @@ async function start() {
   const first = review.current && shownGeometry(review.current);
   showCell(map, review.cell.bbox, first ? boundsOf(first) : null);
   select();
+  // after the frame that shows the first draft: what WorkspaceBenchmark reads
+  requestAnimationFrame(() => requestAnimationFrame(() => performance.mark('assay:first-draft')));
+  panel.showPending(outbox.count);
+  outbox.flush();
 }
 
 start();

@@ -57,7 +57,8 @@ class SecurityConfig {
 		RequestMatcher withBearer = (request) -> BearerTokenFilter.bearerToken(request) != null;
 		CsrfTokenRequestAttributeHandler csrfHandler = new CsrfTokenRequestAttributeHandler();
 		http.authorizeHttpRequests((auth) -> auth
-			.requestMatchers("/", "/*.html", "/css/**", "/js/**", "/img/**", "/webjars/**", "/favicon.ico", "/error")
+			.requestMatchers("/", "/*.html", "/css/**", "/js/**", "/img/**", "/vendor/**", "/webjars/**",
+					"/favicon.ico", "/error")
 			.permitAll()
 			.requestMatchers("/v3/api-docs", "/v3/api-docs/**", "/swagger-ui.html", "/swagger-ui/**")
 			.permitAll()

@@ -238,11 +238,38 @@ public class QueueService {
 	}
 
 	/**
+	 * Checks that an account may take back one of its verdicts of a review pass of a
+	 * cell: it holds a live claim on that pass (renewed and locked as by
+	 * {@link #requireHeld}), and for the first pass, the cell's second review has not
+	 * been taken by anyone.
+	 * @param account the validator
+	 * @param cellId the cell
+	 * @param pass the verdict's review pass, 1 or 2
+	 * @return the cell as the validator works it
+	 * @throws ResponseStatusException 409 when the verdict can no longer be taken back
+	 */
+	@Transactional
+	public CellView requireUndoable(Account account, long cellId, int pass) {
+		CellView held = requireHeld(account, cellId);
+		if (held.pass() != pass) {
+			throw new ResponseStatusException(HttpStatus.CONFLICT,
+					"Your claim on cell " + cellId + " is for review pass " + held.pass() + ", not " + pass);
+		}
+		if (pass == 1 && held.finished()
+				&& this.second.find(cellId).map((p) -> p.validatorId() != null).orElse(false)) {
+			throw new ResponseStatusException(HttpStatus.CONFLICT,
+					"The second review of cell " + cellId + " has begun; its first-review verdicts stand");
+		}
+		return held;
+	}
+
+	/**
 	 * Counts a change in a cell's decided drafts; marks the cell finished when every
 	 * draft has a verdict, and publishes {@link CellFinished} then. Call inside the
 	 * transaction that stored the verdict, after {@link #requireHeld}.
 	 * @param cellId the cell
-	 * @param delta +1 for a first decision on a draft, 0 for a changed one
+	 * @param delta +1 for a first decision on a draft, 0 for a changed one, -1 for a
+	 * withdrawn decision that leaves the draft undecided
 	 * @param validatorId who decided
 	 * @return the cell's progress
 	 */
@@ -263,7 +290,10 @@ public class QueueService {
 			}
 		}
 		else if (!complete && cell.finished()) {
+			// a withdrawn verdict opened the cell again: its holder keeps it, and a
+			// second pass that nobody has taken waits until it is finished again
 			this.jdbc.update("update cell set finished_at = null where id = ?", cellId);
+			this.second.dropUntaken(cellId);
 		}
 		return new CellProgress(cellId, cell.decidedCount(), cell.draftCount(), complete, finishedNow);
 	}
@@ -299,7 +329,8 @@ public class QueueService {
 	 * Counts a change in the second pass of a cell; call after {@link #requireHeld} gave
 	 * pass 2, in the verdict's transaction.
 	 * @param cellId the cell
-	 * @param delta +1 for a first second-pass decision on a draft, 0 for a changed one
+	 * @param delta +1 for a first second-pass decision on a draft, 0 for a changed one,
+	 * -1 for a withdrawn one that leaves the draft undecided
 	 * @param account the second validator
 	 * @return the second pass's progress; {@code finishedNow} when this decision ended it
 	 */

@@ -130,7 +130,7 @@ class SecondPasses {
 	boolean renew(long cellId, long accountId, int leaseMinutes, Instant now) {
 		return this.jdbc.update(
 				"update second_pass set lease_expires_at = ?, version = version + 1"
-						+ " where cell_id = ? and holder_id = ? and lease_expires_at > ? and finished_at is null",
+						+ " where cell_id = ? and holder_id = ? and lease_expires_at > ?",
 				utc(now.plus(leaseMinutes, ChronoUnit.MINUTES)), cellId, accountId, utc(now)) == 1;
 	}
 
@@ -140,7 +140,10 @@ class SecondPasses {
 	}
 
 	/**
-	 * Counts a second-pass decision.
+	 * Counts a second-pass decision, or with {@code delta} -1 a withdrawn one. Like a
+	 * first pass, a finished second pass stays with its holder until the lease lapses or
+	 * they release it, so that they can still change or take back a verdict; a withdrawal
+	 * below the draft count opens it again.
 	 * @return whether the second pass finished with it
 	 */
 	boolean count(long cellId, int delta, Instant now) {
@@ -148,10 +151,26 @@ class SecondPasses {
 			this.jdbc.update("update second_pass set decided_count = decided_count + ? where cell_id = ?", delta,
 					cellId);
 		}
+		if (delta < 0) {
+			this.jdbc.update("update second_pass set finished_at = null"
+					+ " where cell_id = ? and finished_at is not null and decided_count < draft_count", cellId);
+			return false;
+		}
 		return this.jdbc.update(
-				"update second_pass set finished_at = ?, holder_id = null, lease_expires_at = null"
+				"update second_pass set finished_at = ?"
 						+ " where cell_id = ? and finished_at is null and decided_count >= draft_count",
 				utc(now), cellId) == 1;
+	}
+
+	/**
+	 * Removes the second pass of a cell whose first pass is open again, while nobody has
+	 * taken it.
+	 * @return whether it was removed
+	 */
+	boolean dropUntaken(long cellId) {
+		return this.jdbc.update(
+				"delete from second_pass where cell_id = ? and validator_id is null and holder_id is null",
+				cellId) == 1;
 	}
 
 	private static OffsetDateTime utc(Instant instant) {

@@ -58,6 +58,11 @@ class PassVerdicts {
 		return true;
 	}
 
+	/** Leaves a draft without a standing verdict in a pass. */
+	void drop(long draftId, int pass) {
+		this.jdbc.update("delete from pass_verdict where draft_id = ? and review_pass = ?", draftId, pass);
+	}
+
 	/** The standing verdicts of a cell's drafts in a pass, by draft id. */
 	Map<Long, VerdictRecord> inCell(long cellId, int pass) {
 		return this.jdbc

@@ -100,7 +100,9 @@ public class VerdictService {
 		if (pass == PassVerdicts.SECOND) {
 			boolean first = this.passes.put(record, PassVerdicts.SECOND, draft.confidence());
 			progress = this.queue.countSecondDecision(draft.cellId(), first ? 1 : 0, account);
-			if (progress.finishedNow()) {
+			// a finished second pass stays with its validator, who may still change a
+			// verdict
+			if (progress.finished()) {
 				this.cases.sync(draft.cellId());
 			}
 		}

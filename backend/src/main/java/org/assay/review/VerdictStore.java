@@ -2,6 +2,7 @@ package org.assay.review;
 
 import java.sql.ResultSet;
 import java.sql.SQLException;
+import java.time.Instant;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
 import java.util.List;
@@ -97,6 +98,38 @@ class VerdictStore {
 				record.draftId(), record.id(), record.cellId(), record.batchId(), record.verdict().name(),
 				record.validatorId(), at);
 		return true;
+	}
+
+	/** The review pass a verdict was given in: 1, 2, or 0 for a ruling. */
+	int passOf(UUID id) {
+		return this.jdbc.queryForObject("select review_pass from verdict where id = ?", Integer.class, id);
+	}
+
+	boolean withdrawn(UUID id) {
+		return !this.jdbc.queryForList("select 1 from verdict_withdrawal where verdict_id = ?", Integer.class, id)
+			.isEmpty();
+	}
+
+	/** A validator's latest verdict in a pass of a cell that was not taken back. */
+	Optional<UUID> latestOf(long validatorId, long cellId, int pass) {
+		return this.jdbc
+			.queryForList(
+					"select v.id from verdict v where v.cell_id = ? and v.validator_id = ? and v.review_pass = ?"
+							+ " and not exists (select 1 from verdict_withdrawal w where w.verdict_id = v.id)"
+							+ " order by v.created_at desc fetch first 1 rows only",
+					UUID.class, cellId, validatorId, pass)
+			.stream()
+			.findFirst();
+	}
+
+	void markWithdrawn(UUID id, long validatorId, Instant at) {
+		this.jdbc.update("insert into verdict_withdrawal (verdict_id, withdrawn_by, withdrawn_at) values (?, ?, ?)", id,
+				validatorId, at.atOffset(ZoneOffset.UTC));
+	}
+
+	/** Leaves a draft without a current verdict. */
+	void dropCurrent(long draftId) {
+		this.jdbc.update("delete from current_verdict where draft_id = ?", draftId);
 	}
 
 	private static VerdictRecord map(ResultSet rs, int n) throws SQLException {

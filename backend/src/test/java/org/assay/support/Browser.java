@@ -9,6 +9,7 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Map;
 import java.util.function.Function;
 import java.util.logging.Level;
 import java.util.stream.Collectors;
@@ -188,6 +189,40 @@ public final class Browser implements BeforeEachCallback, AfterTestExecutionCall
 	 */
 	public void press(CharSequence... keys) {
 		new Actions(this.driver).sendKeys(keys).perform();
+	}
+
+	/**
+	 * Cuts the page off the network, or connects it again, as Chrome's developer tools do
+	 * (the DevTools protocol's {@code Network.emulateNetworkConditions}): while offline
+	 * every request fails at once, as with a lost connection, and
+	 * {@code navigator.onLine} is false.
+	 * @param offline whether the page is offline
+	 */
+	public void offline(boolean offline) {
+		this.driver.executeCdpCommand("Network.enable", Map.of());
+		this.driver.executeCdpCommand("Network.emulateNetworkConditions",
+				Map.of("offline", offline, "latency", 0, "downloadThroughput", -1, "uploadThroughput", -1));
+	}
+
+	/**
+	 * Runs a script in the page.
+	 * @param script the script's body ({@code return ...} for a value)
+	 * @param args its arguments
+	 * @return what it returned
+	 */
+	public Object script(String script, Object... args) {
+		return this.driver.executeScript(script, args);
+	}
+
+	/**
+	 * Runs an asynchronous script in the page: it calls its last argument with the
+	 * result.
+	 * @param script the script's body
+	 * @param args its arguments
+	 * @return what it passed on
+	 */
+	public Object async(String script, Object... args) {
+		return this.driver.executeAsyncScript(script, args);
 	}
 
 	/**
