@@ -44,11 +44,8 @@ function batchRow(batch, me) {
   if (isLead(me)) {
     actions.append(el('a', { className: 'button button-quiet', href: `rulings.html?batch=${encodeURIComponent(batch.id)}` },
       'Rulings', el('span', { className: 'visually-hidden' }, ` of ${batch.name}`)));
-    actions.append(el('a', {
-      className: 'button button-quiet',
-      href: `api/batches/${encodeURIComponent(batch.id)}/export.geojson`,
-      download: '',
-    }, 'Export GeoJSON'));
+    actions.append(el('a', { className: 'button button-quiet', href: `lead.html?batch=${encodeURIComponent(batch.id)}` },
+      'Overview', el('span', { className: 'visually-hidden' }, ` of ${batch.name}`)));
   }
   actions.append(status);
   const model = [batch.modelName, batch.modelVersion].filter(Boolean).join(' ');

@@ -111,6 +111,44 @@ class Dashboard {
 		return TABLES.contains(name) ? tables(batch, zone, breakAfter, this.clock.instant()).get(name) : null;
 	}
 
+	/**
+	 * The cells of a batch for the map: box, counts, risk and state ({@code open},
+	 * {@code assigned}, {@code claimed}, {@code second-review} while a finished cell
+	 * waits for or undergoes its blind second review, {@code finished}).
+	 */
+	List<Map<String, Object>> cells(long batchId) {
+		Instant now = this.clock.instant();
+		return this.jdbc.query("select c.id, c.seq, c.min_x, c.min_y, c.max_x, c.max_y, c.draft_count, c.decided_count,"
+				+ " c.risk, h.username, c.lease_expires_at, a.username, c.finished_at, c.second_review, s.finished_at,"
+				+ " sh.username, s.lease_expires_at from cell c left join app_user h on h.id = c.holder_id"
+				+ " left join app_user a on a.id = c.assigned_to left join second_pass s on s.cell_id = c.id"
+				+ " left join app_user sh on sh.id = s.holder_id where c.batch_id = ? order by c.seq", (rs, n) -> {
+					Map<String, Object> cell = new LinkedHashMap<>();
+					cell.put("id", rs.getLong(1));
+					cell.put("seq", rs.getInt(2));
+					cell.put("bbox",
+							new double[] { rs.getDouble(3), rs.getDouble(4), rs.getDouble(5), rs.getDouble(6) });
+					cell.put("drafts", rs.getInt(7));
+					cell.put("decided", rs.getInt(8));
+					cell.put("risk", Math.round(rs.getDouble(9) * 1000) / 1000.0);
+					OffsetDateTime lease = rs.getObject(11, OffsetDateTime.class);
+					boolean held = rs.getString(10) != null && lease != null && lease.toInstant().isAfter(now);
+					OffsetDateTime secondLease = rs.getObject(17, OffsetDateTime.class);
+					boolean secondHeld = rs.getString(16) != null && secondLease != null
+							&& secondLease.toInstant().isAfter(now);
+					boolean firstDone = rs.getObject(13, OffsetDateTime.class) != null;
+					boolean secondDone = !rs.getBoolean(14) || rs.getObject(15, OffsetDateTime.class) != null;
+					String state = (firstDone && secondDone) ? "finished" : firstDone ? "second-review"
+							: held ? "claimed" : (rs.getString(12) != null) ? "assigned" : "open";
+					cell.put("state", state);
+					cell.put("holder", held ? rs.getString(10) : secondHeld ? rs.getString(16) : null);
+					cell.put("leaseExpiresAt", held ? lease.toInstant().toString()
+							: secondHeld ? secondLease.toInstant().toString() : null);
+					cell.put("assignedTo", rs.getString(12));
+					return cell;
+				}, batchId);
+	}
+
 	private Map<String, Table> tables(BatchSummary batch, ZoneId zone, Duration breakAfter, Instant now) {
 		Map<String, Table> tables = new LinkedHashMap<>();
 		Map<String, Map<Long, Long>> perValidator = verdictBuckets(batch.id());

@@ -48,6 +48,12 @@ class DashboardController {
 		return this.dashboard.view(batch, zone(zone), breakAfter(breakMinutes));
 	}
 
+	@GetMapping("/api/batches/{id}/dashboard/cells")
+	java.util.List<Map<String, Object>> cells(@PathVariable long id) {
+		this.batches.requireRun(this.accounts.current(), id);
+		return this.dashboard.cells(id);
+	}
+
 	@GetMapping("/api/batches/{id}/dashboard/{table}.csv")
 	ResponseEntity<String> csv(@PathVariable long id, @PathVariable String table,
 			@RequestParam(defaultValue = "UTC") String zone, @RequestParam(defaultValue = "10") int breakMinutes) {
