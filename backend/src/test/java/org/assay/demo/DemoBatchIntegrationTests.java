@@ -117,6 +117,32 @@ class DemoBatchIntegrationTests {
 			.forEach((f) -> exported.put(f.get("properties").get("source_id").asString(),
 					f.get("properties").get("verdict").asString()));
 		assertThat(exported.keySet()).containsAll(accepted).doesNotContainAnyElementsOf(rejected);
+
+		// the other two downloads of the lead's view: the GeoPackage and the training
+		// set,
+		// whose drafts are exactly the rejected ones, each with masks
+		ApiClient.Response gpkg = tamsin.get("/api/batches/" + batchId + "/export.gpkg");
+		assertThat(gpkg.status()).isEqualTo(200);
+		assertThat(new String(gpkg.body(), 0, 15, java.nio.charset.StandardCharsets.US_ASCII))
+			.isEqualTo("SQLite format 3");
+		ApiClient.Response zip = tamsin.get("/api/batches/" + batchId + "/training.zip");
+		assertThat(zip.status()).isEqualTo(200);
+		Map<String, byte[]> entries = new HashMap<>();
+		try (java.util.zip.ZipInputStream in = new java.util.zip.ZipInputStream(
+				new java.io.ByteArrayInputStream(zip.body()))) {
+			for (var entry = in.getNextEntry(); entry != null; entry = in.getNextEntry()) {
+				entries.put(entry.getName(), in.readAllBytes());
+			}
+		}
+		catch (java.io.IOException ex) {
+			throw new java.io.UncheckedIOException(ex);
+		}
+		List<String> trained = new ArrayList<>();
+		JsonNode features = new tools.jackson.databind.ObjectMapper().readTree(entries.get("drafts.geojson"))
+			.get("features");
+		features.forEach((f) -> trained.add(f.get("properties").get("source_id").asString()));
+		assertThat(trained).containsExactlyInAnyOrderElementsOf(rejected);
+		assertThat(entries.keySet()).anyMatch((name) -> name.startsWith("masks/18/"));
 	}
 
 	private static void give(ApiClient client, long draftId, String verdict, String reason) {
