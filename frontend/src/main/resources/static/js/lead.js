@@ -290,7 +290,33 @@ function showCell(cell) {
       fact('Risk', String(cell.risk)),
       fact('Held by', cell.holder ? `${cell.holder} until ${hourLabel(cell.leaseExpiresAt)}` : 'nobody'),
       fact('Assigned to', cell.assignedTo || 'nobody')),
-    actions, form, status);
+    actions, form, status, el('div', { id: 'cell-history' }, el('p', { className: 'muted small' }, 'Loading its history…')));
+  showHistory(cell);
+}
+
+/** The cell's drafts by standing verdict and its verdict log, newest first. */
+async function showHistory(cell) {
+  let history;
+  try {
+    history = await get(api(`dashboard/cells/${encodeURIComponent(cell.id)}/history`));
+  } catch (e) {
+    byId('cell-history')?.replaceChildren(el('p', { className: 'status', dataset: { kind: 'error' } }, e.message));
+    return;
+  }
+  const holder = byId('cell-history');
+  if (!holder) return;
+  const standing = Object.entries(history.standing).map(([v, n]) => `${STATES[v]?.label || v} ${number.format(n)}`).join(', ');
+  const when = (iso) => (iso ? dateLabel(iso) : '');
+  const rows = history.events.map((e) => [when(e.at), e.by, e.sourceId || `#${e.draftId}`, STATES[e.verdict]?.label || e.verdict,
+    e.reasonCode, e.pass, e.withdrawnAt ? `taken back ${when(e.withdrawnAt)}` : '']);
+  const box = el('div');
+  holder.replaceChildren(
+    el('p', {}, standing ? `Standing verdicts: ${standing}.` : 'No draft of this cell has a verdict yet.'),
+    history.finishedAt ? el('p', { className: 'small' }, `First review finished ${when(history.finishedAt)}`
+      + (history.secondPassFinishedAt ? `; second review finished ${when(history.secondPassFinishedAt)}.` : '.')) : null,
+    box);
+  tableView(box, { columns: ['when', 'by', 'draft', 'verdict', 'reason', 'pass', 'withdrawn'], rows }, 'Verdict log of the cell', null);
+  box.querySelector('details').open = true;
 }
 
 // ---- exports ----

@@ -100,6 +100,10 @@ class LeadPageBrowserTests {
 		this.browser.await((driver) -> this.browser.visible(By.id("cell-detail")).getText().contains("kasimir"));
 		assertThat(this.browser.visible(By.id("cell-detail")).getText()).contains("Being reviewed")
 			.contains("Release kasimir's claim");
+		this.browser.await((driver) -> this.browser.visible(By.id("cell-history")).getText().contains("Verdict log"));
+		assertThat(this.browser.visible(By.id("cell-history")).getText()).contains("Standing verdicts")
+			.contains("kasimir")
+			.contains("not-a-feature");
 
 		assertThat(this.browser.driver().findElement(By.id("export-training")).getDomAttribute("href"))
 			.contains("training.zip?zoom=18&roadWidth=6");

@@ -255,6 +255,22 @@ abstract class DashboardScenarios {
 		assertThat(this.lead.get("/api/batches/" + this.batchId + "/dashboard?zone=Mars/Olympus").status())
 			.isEqualTo(400);
 		assertThat(this.validator.get("/api/batches/" + this.batchId + "/dashboard").status()).isEqualTo(403);
+
+		// each cell's log: together the 13 verdicts, the withdrawn one marked
+		int events = 0;
+		int withdrawn = 0;
+		for (Long cellId : this.jdbc.queryForList("select id from cell where batch_id = ?", Long.class, this.batchId)) {
+			JsonNode history = this.lead.get("/api/batches/" + this.batchId + "/dashboard/cells/" + cellId + "/history")
+				.json();
+			for (JsonNode event : history.get("events")) {
+				events++;
+				withdrawn += event.get("withdrawnAt").isNull() ? 0 : 1;
+			}
+		}
+		assertThat(events).isEqualTo(13);
+		assertThat(withdrawn).isEqualTo(1);
+		assertThat(this.lead.get("/api/batches/" + this.batchId + "/dashboard/cells/999999/history").status())
+			.isEqualTo(404);
 	}
 
 	private static List<String> columns(JsonNode table) {
