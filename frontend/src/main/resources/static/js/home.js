@@ -103,6 +103,9 @@ async function start() {
   const status = byId('home-status');
   try {
     const me = await showSignedIn();
+    if (isLead(me)) {
+      byId('batches-title').after(el('p', {}, el('a', { href: 'overview.html' }, 'All my batches at a glance')));
+    }
     const midnight = new Date();
     midnight.setHours(0, 0, 0, 0);
     const [batches, progress] = await Promise.all([

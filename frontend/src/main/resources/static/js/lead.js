@@ -6,6 +6,7 @@
 
 import { get, post } from './api.js';
 import { byId, cellNumber, el, say } from './dom.js';
+import { chart, tableView } from './figures.js';
 import { showSignedIn } from './session.js';
 import { OKABE_ITO, STATES, VERDICTS } from './styles.js';
 
@@ -33,7 +34,6 @@ const RISK_STEPS = [
   { upTo: Infinity, color: '#8c3b00', label: '0.8 and above' },
 ];
 
-const charts = {};
 let cellMap, cellLayer, cells = [], colourBy = 'state', validators = [];
 
 const api = (path) => `api/batches/${encodeURIComponent(batchId)}/${path}`;
@@ -46,33 +46,6 @@ function hourLabel(iso) {
 function dateLabel(iso) {
   if (!iso) return 'not foreseeable at the recent pace';
   return new Date(iso).toLocaleString([], { dateStyle: 'medium', timeStyle: 'short', timeZone: zone });
-}
-
-/** A table of figures with its CSV download, folded away under the chart. */
-function tableView(holder, table, title, csv) {
-  const head = el('tr', {}, ...table.columns.map((c) => el('th', { scope: 'col' }, c.replaceAll('_', ' '))));
-  const body = table.rows.map((row) => el('tr', {}, ...row.map((v, i) =>
-    (i === 0 ? el('th', { scope: 'row' }, String(v)) : el('td', {}, typeof v === 'number' ? number.format(v) : String(v))))));
-  const open = holder.querySelector('details')?.open || false;
-  holder.replaceChildren(el('details', { open },
-    el('summary', {}, `${title}: table (${number.format(table.rows.length)} rows)`),
-    el('div', { className: 'table-scroll' }, el('table', { className: 'data-table' },
-      el('caption', { className: 'visually-hidden' }, title), el('thead', {}, head), el('tbody', {}, ...body))),
-    csv ? el('a', { href: csv, download: '' }, `Download ${title.toLowerCase()} as CSV`) : null));
-}
-
-/** Draws or updates a chart in place. */
-function chart(id, config) {
-  const existing = charts[id];
-  if (existing) {
-    existing.data = config.data;
-    existing.update('none');
-    return;
-  }
-  charts[id] = new Chart(byId(id), {
-    ...config,
-    options: { responsive: true, maintainAspectRatio: false, animation: false, ...config.options },
-  });
 }
 
 function perValidatorBars(id, table, label) {

@@ -141,8 +141,11 @@ class Dashboard {
 					String state = (firstDone && secondDone) ? "finished" : firstDone ? "second-review"
 							: held ? "claimed" : (rs.getString(12) != null) ? "assigned" : "open";
 					cell.put("state", state);
-					cell.put("holder", held ? rs.getString(10) : secondHeld ? rs.getString(16) : null);
-					cell.put("leaseExpiresAt", held ? lease.toInstant().toString()
+					// once the first pass is done, the claim that matters is the second
+					// pass's
+					boolean showFirst = held && !firstDone;
+					cell.put("holder", showFirst ? rs.getString(10) : secondHeld ? rs.getString(16) : null);
+					cell.put("leaseExpiresAt", showFirst ? lease.toInstant().toString()
 							: secondHeld ? secondLease.toInstant().toString() : null);
 					cell.put("assignedTo", rs.getString(12));
 					return cell;

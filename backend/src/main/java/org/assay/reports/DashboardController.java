@@ -35,7 +35,10 @@ class DashboardController {
 
 	private final AccountService accounts;
 
-	DashboardController(Dashboard dashboard, BatchService batches, AccountService accounts) {
+	private final TeamOverview team;
+
+	DashboardController(Dashboard dashboard, TeamOverview team, BatchService batches, AccountService accounts) {
+		this.team = team;
 		this.dashboard = dashboard;
 		this.batches = batches;
 		this.accounts = accounts;
@@ -46,6 +49,22 @@ class DashboardController {
 			@RequestParam(defaultValue = "10") int breakMinutes) {
 		BatchSummary batch = this.batches.requireRun(this.accounts.current(), id);
 		return this.dashboard.view(batch, zone(zone), breakAfter(breakMinutes));
+	}
+
+	/**
+	 * Across the batches the signed-in lead runs (an admin: all); a validator gets 403.
+	 */
+	@GetMapping("/api/overview")
+	Map<String, Object> overview(@RequestParam(defaultValue = "UTC") String zone) {
+		org.assay.accounts.Account me = this.accounts.current();
+		if (me.role() == org.assay.accounts.Role.VALIDATOR) {
+			throw new ResponseStatusException(HttpStatus.FORBIDDEN, "The overview across batches is for leads");
+		}
+		java.util.List<BatchSummary> mine = this.batches.visibleTo(me)
+			.stream()
+			.filter((batch) -> this.batches.runs(me, batch))
+			.toList();
+		return this.team.view(mine, zone(zone));
 	}
 
 	@GetMapping("/api/batches/{id}/dashboard/cells")

@@ -135,6 +135,8 @@ abstract class DashboardScenarios {
 		give.accept(new Object[] { bId, "2026-06-01T10:00:30Z", "REJECT", "already-mapped" }, false);
 		give.accept(new Object[] { bId, "2026-06-01T10:00:40Z", "REJECT", "not-a-feature" }, true);
 		give.accept(new Object[] { bId, "2026-06-02T20:00:00Z", "ACCEPT", "as-drafted" }, false);
+		this.jdbc.update("update cell set decided_count = (select count(*) from current_verdict v"
+				+ " where v.cell_id = cell.id) where batch_id = ?", this.batchId);
 		this.jdbc.update("update cell set finished_at = ? where id = ?", OffsetDateTime.parse("2026-06-02T09:00:20Z"),
 				drafts.get(0)[1]);
 		this.clock.advance(Duration.between(this.clock.instant(), Instant.parse("2026-06-03T12:00:00Z")));
@@ -271,6 +273,34 @@ abstract class DashboardScenarios {
 		assertThat(withdrawn).isEqualTo(1);
 		assertThat(this.lead.get("/api/batches/" + this.batchId + "/dashboard/cells/999999/history").status())
 			.isEqualTo(404);
+	}
+
+	@Test
+	void theOverviewAcrossBatchesHoldsThisBatchAndItsValidators() {
+		JsonNode overview = this.lead.get("/api/overview?zone=UTC").json();
+		JsonNode row = null;
+		for (JsonNode batch : overview.get("batches")) {
+			if (batch.get("id").asLong() == this.batchId) {
+				row = batch;
+			}
+		}
+		assertThat(row).as("the lead's own batch").isNotNull();
+		assertThat(row.get("decided").asLong()).isEqualTo(12);
+		assertThat(row.get("open").asLong()).isEqualTo(8);
+		assertThat(row.get("decidedToday").asLong()).isZero();
+		// as the batch's own forecast: days 9, 3, 0, mean 4, 8 open, 2 days
+		assertThat(row.get("pacePerDay").asDouble()).isEqualTo(4.0);
+		assertThat(row.get("expected").asString()).isEqualTo("2026-06-05T12:00Z");
+		JsonNode daily = overview.get("tables").get("daily");
+		int column = columns(daily).indexOf("dashboard");
+		assertThat(daily.get("rows")).hasSize(14);
+		// the last 14 days end on 06-03: 06-01 is the 12th row
+		assertThat(daily.get("rows").get(11).get(0).asString()).isEqualTo("2026-06-01");
+		assertThat(daily.get("rows").get(11).get(column).asLong()).isEqualTo(9);
+		Map<String, List<Long>> validators = rows(overview.get("tables").get("validators"));
+		assertThat(validators.get(this.a)).containsExactly(0L, 8L, 8L);
+		assertThat(validators.get(this.b)).containsExactly(0L, 4L, 4L);
+		assertThat(this.validator.get("/api/overview").status()).isEqualTo(403);
 	}
 
 	private static List<String> columns(JsonNode table) {
