@@ -36,8 +36,9 @@ async function refresh() {
       },
       options: { scales: { x: { stacked: true }, y: { stacked: true, beginAtZero: true, title: { display: true, text: 'drafts decided' } } } },
     });
-    tableView(byId('table-daily'), daily, 'Drafts per day and batch', null);
-    tableView(byId('table-validators'), view.tables.validators, 'Validators across batches', null);
+    const csv = (name) => `api/overview/${name}.csv?zone=${encodeURIComponent(zone)}`;
+    tableView(byId('table-daily'), daily, 'Drafts per day and batch', csv('daily'));
+    tableView(byId('table-validators'), view.tables.validators, 'Validators across batches', csv('validators'));
     byId('refreshed').textContent = `Updated ${new Date(view.generatedAt).toLocaleTimeString([], { timeZone: zone })} (${zone}).`;
     say(byId('overview-status'), '');
     document.body.dataset.loaded = 'true';

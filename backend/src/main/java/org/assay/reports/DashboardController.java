@@ -67,6 +67,21 @@ class DashboardController {
 		return this.team.view(mine, zone(zone));
 	}
 
+	@GetMapping("/api/overview/{table}.csv")
+	ResponseEntity<String> overviewCsv(@PathVariable String table, @RequestParam(defaultValue = "UTC") String zone) {
+		Map<String, Object> view = overview(zone);
+		@SuppressWarnings("unchecked")
+		Dashboard.Table found = ((Map<String, Dashboard.Table>) view.get("tables")).get(table);
+		if (found == null) {
+			throw new ResponseStatusException(HttpStatus.NOT_FOUND,
+					"No table " + table + "; the tables are daily, validators");
+		}
+		return ResponseEntity.ok()
+			.contentType(CSV)
+			.header(HttpHeaders.CONTENT_DISPOSITION, "attachment; filename=\"overview-" + table + ".csv\"")
+			.body(found.csv().toString());
+	}
+
 	@GetMapping("/api/batches/{id}/dashboard/cells")
 	java.util.List<Map<String, Object>> cells(@PathVariable long id) {
 		this.batches.requireRun(this.accounts.current(), id);

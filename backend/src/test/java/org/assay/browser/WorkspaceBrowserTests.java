@@ -45,7 +45,10 @@ class WorkspaceBrowserTests {
 	// what Chromium logs for each request made while the page is offline
 	private static final String OFFLINE = "net::ERR_INTERNET_DISCONNECTED";
 
-	/** Where the screenshot of the workspace is left; frontend/screenshots/workspace.png is a copy. */
+	/**
+	 * Where the screenshot of the workspace is left; frontend/screenshots/workspace.png
+	 * is a copy.
+	 */
 	static final Path SCREENSHOT = Path.of("target", "screenshots", "workspace.png");
 
 	@RegisterExtension

@@ -301,6 +301,10 @@ abstract class DashboardScenarios {
 		assertThat(validators.get(this.a)).containsExactly(0L, 8L, 8L);
 		assertThat(validators.get(this.b)).containsExactly(0L, 4L, 4L);
 		assertThat(this.validator.get("/api/overview").status()).isEqualTo(403);
+		ApiClient.Response csv = this.lead.get("/api/overview/validators.csv?zone=UTC");
+		assertThat(csv.status()).isEqualTo(200);
+		assertThat(csv.text()).startsWith("validator,decided_today,decided_last_7_days,decided_last_14_days\r\n")
+			.contains(this.a + ",0,8,8\r\n");
 	}
 
 	private static List<String> columns(JsonNode table) {
