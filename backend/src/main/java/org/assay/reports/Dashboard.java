@@ -397,31 +397,43 @@ class Dashboard {
 		return new Table(columns, rows);
 	}
 
-	/** Standing verdicts of the drafts carrying each flag, and of those with none. */
+	/**
+	 * Standing verdicts of the drafts carrying each flag, and of those with none, with
+	 * the reasons of the rejections.
+	 */
 	private Table flags(long batchId) {
 		StringBuilder sql = new StringBuilder(
-				"select c.verdict, count(*), sum(case when d.flags is null then 1 else 0 end)");
+				"select c.verdict, v.reason_code, count(*), sum(case when d.flags is null then 1 else 0 end)");
 		for (FlagKind kind : FlagKind.values()) {
 			sql.append(", sum(case when d.flags like '%\"code\":\"")
 				.append(kind.code())
 				.append("\"%' then 1 else 0 end)");
 		}
-		sql.append(" from current_verdict c join draft d on d.id = c.draft_id where c.batch_id = ? group by c.verdict");
+		sql.append(" from current_verdict c join draft d on d.id = c.draft_id join verdict v on v.id = c.verdict_id")
+			.append(" where c.batch_id = ? group by c.verdict, v.reason_code");
 		int kinds = FlagKind.values().length;
 		long[][] counts = new long[kinds + 1][VERDICTS.size()];
+		List<Map<String, Long>> rejections = new ArrayList<>();
+		for (int k = 0; k <= kinds; k++) {
+			rejections.add(new TreeMap<>());
+		}
 		this.jdbc.query(sql.toString(), (RowCallbackHandler) (rs) -> {
 			int verdict = VERDICTS.indexOf(rs.getString(1));
 			if (verdict < 0) {
 				return;
 			}
-			counts[kinds][verdict] = rs.getLong(3);
-			for (int k = 0; k < kinds; k++) {
-				counts[k][verdict] = rs.getLong(4 + k);
+			boolean rejected = "REJECT".equals(rs.getString(1));
+			for (int k = 0; k <= kinds; k++) {
+				long n = rs.getLong((k < kinds) ? 5 + k : 4);
+				counts[k][verdict] += n;
+				if (rejected && n > 0) {
+					rejections.get(k).merge(rs.getString(2), n, Long::sum);
+				}
 			}
 		}, batchId);
 		List<String> columns = new ArrayList<>(List.of("flag", "label", "drafts"));
 		VERDICTS.forEach((v) -> columns.add(v.toLowerCase(java.util.Locale.ROOT)));
-		columns.add("reject_share");
+		columns.addAll(List.of("reject_share", "reject_reasons"));
 		List<List<Object>> rows = new ArrayList<>();
 		for (int k = 0; k <= kinds; k++) {
 			long total = java.util.Arrays.stream(counts[k]).sum();
@@ -436,6 +448,7 @@ class Dashboard {
 				row.add(c);
 			}
 			row.add((total > 0) ? round((double) counts[k][2] / total) : "");
+			row.add(reasonList(rejections.get(k)));
 			rows.add(row);
 		}
 		return new Table(columns, rows);

@@ -135,6 +135,13 @@ abstract class DashboardScenarios {
 		give.accept(new Object[] { bId, "2026-06-01T10:00:30Z", "REJECT", "already-mapped" }, false);
 		give.accept(new Object[] { bId, "2026-06-01T10:00:40Z", "REJECT", "not-a-feature" }, true);
 		give.accept(new Object[] { bId, "2026-06-02T20:00:00Z", "ACCEPT", "as-drafted" }, false);
+		// the checks' own flags cleared (each test road stands alone), then a near miss
+		// flagged on a's first accepted and first rejected draft
+		this.jdbc.update("update draft set flags = null where batch_id = ?", this.batchId);
+		for (int i : new int[] { 0, 4 }) {
+			this.jdbc.update("update draft set flags = ? where id = ?",
+					"[{\"code\":\"near-miss\",\"label\":\"Nearly meets a road\"}]", drafts.get(i)[0]);
+		}
 		this.jdbc.update("update cell set decided_count = (select count(*) from current_verdict v"
 				+ " where v.cell_id = cell.id) where batch_id = ?", this.batchId);
 		this.jdbc.update("update cell set finished_at = ? where id = ?", OffsetDateTime.parse("2026-06-02T09:00:20Z"),
@@ -208,6 +215,17 @@ abstract class DashboardScenarios {
 		assertThat(banded).isEqualTo(12);
 		assertThat(rejected).isEqualTo(3);
 		assertThat(rows(tables.get("cells-daily")).get("2026-06-02")).containsExactly(1L);
+
+		// by flag: near-miss on 2 drafts (1 accepted, 1 rejected not-a-feature); none on
+		// the other 10
+		Map<String, JsonNode> flags = new HashMap<>();
+		tables.get("flags").get("rows").forEach((r) -> flags.put(r.get(0).asString(), r));
+		assertThat(flags.get("near-miss").get(2).asLong()).isEqualTo(2);
+		assertThat(flags.get("near-miss").get(3).asLong()).isEqualTo(1);
+		assertThat(flags.get("near-miss").get(5).asLong()).isEqualTo(1);
+		assertThat(flags.get("near-miss").get(8).asString()).isEqualTo("not-a-feature:1");
+		assertThat(flags.get("none").get(2).asLong()).isEqualTo(10);
+		assertThat(flags.get("none").get(8).asString()).isEqualTo("already-mapped:1 not-a-feature:1");
 	}
 
 	@Test
