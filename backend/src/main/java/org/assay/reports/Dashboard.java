@@ -169,7 +169,7 @@ class Dashboard {
 	}
 
 	/** Verdicts per validator and quarter hour. */
-	private Map<String, Map<Long, Long>> verdictBuckets(long batchId) {
+	Map<String, Map<Long, Long>> verdictBuckets(long batchId) {
 		Map<String, Map<Long, Long>> counts = new TreeMap<>();
 		this.jdbc.query(
 				"select u.username, g.bucket, g.n from (select v.validator_id, " + BUCKET.formatted("v.created_at")
@@ -213,8 +213,7 @@ class Dashboard {
 	}
 
 	/** Drafts decided on each day from the batch's first to today. */
-	private static Table daily(Map<String, Map<Long, Long>> perValidator, ZoneId zone, BatchSummary batch,
-			Instant now) {
+	static Table daily(Map<String, Map<Long, Long>> perValidator, ZoneId zone, BatchSummary batch, Instant now) {
 		List<String> columns = new ArrayList<>(List.of("day", "team"));
 		columns.addAll(perValidator.keySet());
 		Map<LocalDate, List<Object>> rows = dayRows(batch, zone, now, columns.size() - 1);
@@ -237,8 +236,7 @@ class Dashboard {
 	 * between consecutive verdicts, gaps longer than the break left out (linear
 	 * interpolation between ranks, as {@code percentile_cont}).
 	 */
-	private Table pace(long batchId, Map<String, Map<Long, Long>> perValidator, ZoneId zone, Instant now,
-			Duration breakAfter) {
+	Table pace(long batchId, Map<String, Map<Long, Long>> perValidator, ZoneId zone, Instant now, Duration breakAfter) {
 		LocalDate today = now.atZone(zone).toLocalDate();
 		Map<String, Object[]> gaps = new HashMap<>();
 		this.jdbc.query("select u.username, g.median, g.p90, g.n from (select validator_id,"
@@ -263,7 +261,7 @@ class Dashboard {
 				List.of("validator", "decided", "decided_today", "median_seconds", "p90_seconds", "gaps_timed"), rows);
 	}
 
-	private Table cellsDaily(BatchSummary batch, ZoneId zone, Instant now) {
+	Table cellsDaily(BatchSummary batch, ZoneId zone, Instant now) {
 		Map<Long, Long> buckets = new HashMap<>();
 		this.jdbc.query(
 				"select " + BUCKET.formatted("finished_at") + ", count(*) from cell where batch_id = ?"
@@ -280,7 +278,7 @@ class Dashboard {
 	}
 
 	/** Open drafts at the end of each day (today: now), from the standing verdicts. */
-	private Table burndown(BatchSummary batch, ZoneId zone, Instant now) {
+	Table burndown(BatchSummary batch, ZoneId zone, Instant now) {
 		Map<Long, Long> buckets = new HashMap<>();
 		this.jdbc.query(
 				"select " + BUCKET.formatted("decided_at") + ", count(*) from current_verdict where batch_id = ?"
@@ -302,7 +300,7 @@ class Dashboard {
 		return new Table(List.of("day", "open", "decided"), new ArrayList<>(rows.values()));
 	}
 
-	private Map<String, Object> progress(BatchSummary batch, ZoneId zone, Instant now, Table daily) {
+	Map<String, Object> progress(BatchSummary batch, ZoneId zone, Instant now, Table daily) {
 		Long standing = this.jdbc.queryForObject("select count(*) from current_verdict where batch_id = ?", Long.class,
 				batch.id());
 		long open = batch.draftCount() - standing;
@@ -335,7 +333,7 @@ class Dashboard {
 		return body;
 	}
 
-	private Table reasons(long batchId) {
+	Table reasons(long batchId) {
 		List<List<Object>> rows = new ArrayList<>();
 		this.jdbc.query(
 				"select c.verdict, v.reason_code, count(*) from current_verdict c join verdict v on v.id = c.verdict_id"
@@ -347,7 +345,7 @@ class Dashboard {
 		return new Table(List.of("verdict", "reason_code", "drafts"), rows);
 	}
 
-	private Table reasonsByValidator(long batchId) {
+	Table reasonsByValidator(long batchId) {
 		List<List<Object>> rows = new ArrayList<>();
 		this.jdbc.query("select u.username, g.verdict, g.reason_code, g.n from (select v.validator_id, v.verdict,"
 				+ " v.reason_code, count(*) as n from verdict v where" + OWN_REVIEWS
@@ -360,7 +358,7 @@ class Dashboard {
 	}
 
 	/** Standing verdicts by confidence band, and the reasons of the rejections. */
-	private Table confidence(long batchId) {
+	Table confidence(long batchId) {
 		long[][] counts = new long[BANDS][VERDICTS.size()];
 		List<Map<String, Long>> rejections = new ArrayList<>();
 		for (int i = 0; i < BANDS; i++) {
@@ -401,7 +399,7 @@ class Dashboard {
 	 * Standing verdicts of the drafts carrying each flag, and of those with none, with
 	 * the reasons of the rejections.
 	 */
-	private Table flags(long batchId) {
+	Table flags(long batchId) {
 		StringBuilder sql = new StringBuilder(
 				"select c.verdict, v.reason_code, count(*), sum(case when d.flags is null then 1 else 0 end)");
 		for (FlagKind kind : FlagKind.values()) {
