@@ -51,10 +51,7 @@ class Dashboard {
 
 	static final int BANDS = 10;
 
-	private static final String OWN_REVIEWS = " v.batch_id = ? and v.review_pass in (1, 2)"
-			+ " and not exists (select 1 from verdict_withdrawal w where w.verdict_id = v.id)";
-
-	private static final String BUCKET = "cast(floor(extract(epoch from %s) / " + TimeBuckets.SECONDS + ") as bigint)";
+	private static final String OWN_REVIEWS = " v.batch_id = ? and" + TimeBuckets.OWN_REVIEWS;
 
 	private final JdbcTemplate jdbc;
 
@@ -172,9 +169,9 @@ class Dashboard {
 	Map<String, Map<Long, Long>> verdictBuckets(long batchId) {
 		Map<String, Map<Long, Long>> counts = new TreeMap<>();
 		this.jdbc.query(
-				"select u.username, g.bucket, g.n from (select v.validator_id, " + BUCKET.formatted("v.created_at")
+				"select u.username, g.bucket, g.n from (select v.validator_id, " + TimeBuckets.bucket("v.created_at")
 						+ " as bucket, count(*) as n from verdict v where" + OWN_REVIEWS + " group by v.validator_id, "
-						+ BUCKET.formatted("v.created_at") + ") g" + " join app_user u on u.id = g.validator_id",
+						+ TimeBuckets.bucket("v.created_at") + ") g" + " join app_user u on u.id = g.validator_id",
 				(RowCallbackHandler) (rs) -> counts.computeIfAbsent(rs.getString(1), (k) -> new HashMap<>())
 					.put(rs.getLong(2), rs.getLong(3)),
 				batchId);
@@ -264,8 +261,8 @@ class Dashboard {
 	Table cellsDaily(BatchSummary batch, ZoneId zone, Instant now) {
 		Map<Long, Long> buckets = new HashMap<>();
 		this.jdbc.query(
-				"select " + BUCKET.formatted("finished_at") + ", count(*) from cell where batch_id = ?"
-						+ " and finished_at is not null group by " + BUCKET.formatted("finished_at"),
+				"select " + TimeBuckets.bucket("finished_at") + ", count(*) from cell where batch_id = ?"
+						+ " and finished_at is not null group by " + TimeBuckets.bucket("finished_at"),
 				(RowCallbackHandler) (rs) -> buckets.put(rs.getLong(1), rs.getLong(2)), batch.id());
 		Map<LocalDate, List<Object>> rows = dayRows(batch, zone, now, 1);
 		TimeBuckets.byDay(buckets, zone).forEach((day, count) -> {
@@ -281,8 +278,8 @@ class Dashboard {
 	Table burndown(BatchSummary batch, ZoneId zone, Instant now) {
 		Map<Long, Long> buckets = new HashMap<>();
 		this.jdbc.query(
-				"select " + BUCKET.formatted("decided_at") + ", count(*) from current_verdict where batch_id = ?"
-						+ " group by " + BUCKET.formatted("decided_at"),
+				"select " + TimeBuckets.bucket("decided_at") + ", count(*) from current_verdict where batch_id = ?"
+						+ " group by " + TimeBuckets.bucket("decided_at"),
 				(RowCallbackHandler) (rs) -> buckets.put(rs.getLong(1), rs.getLong(2)), batch.id());
 		TreeMap<LocalDate, Long> decided = TimeBuckets.byDay(buckets, zone);
 		Map<LocalDate, List<Object>> rows = dayRows(batch, zone, now, 2);

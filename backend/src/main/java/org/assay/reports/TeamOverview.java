@@ -31,11 +31,7 @@ class TeamOverview {
 
 	static final int DAYS = 14;
 
-	private static final String OWN_REVIEWS = " v.review_pass in (1, 2)"
-			+ " and not exists (select 1 from verdict_withdrawal w where w.verdict_id = v.id)";
-
-	private static final String BUCKET = "cast(floor(extract(epoch from v.created_at) / " + TimeBuckets.SECONDS
-			+ ") as bigint)";
+	private static final String BUCKET = TimeBuckets.bucket("v.created_at");
 
 	private final JdbcTemplate jdbc;
 
@@ -61,8 +57,8 @@ class TeamOverview {
 			String ids = batches.stream().map((b) -> String.valueOf(b.id())).collect(Collectors.joining(", "));
 			this.jdbc.query("select g.batch_id, u.username, g.bucket, g.n from (select v.batch_id, v.validator_id, "
 					+ BUCKET + " as bucket, count(*) as n from verdict v where v.batch_id in (" + ids + ")"
-					+ " and v.created_at >= ? and" + OWN_REVIEWS + " group by v.batch_id, v.validator_id, " + BUCKET
-					+ ") g join app_user u on u.id = g.validator_id", (RowCallbackHandler) (rs) -> {
+					+ " and v.created_at >= ? and" + TimeBuckets.OWN_REVIEWS + " group by v.batch_id, v.validator_id, "
+					+ BUCKET + ") g join app_user u on u.id = g.validator_id", (RowCallbackHandler) (rs) -> {
 						byBatch.computeIfAbsent(rs.getLong(1), (k) -> new HashMap<>())
 							.merge(rs.getLong(3), rs.getLong(4), Long::sum);
 						byValidator.computeIfAbsent(rs.getString(2), (k) -> new HashMap<>())

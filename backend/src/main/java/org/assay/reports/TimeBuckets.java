@@ -18,6 +18,22 @@ final class TimeBuckets {
 
 	static final int SECONDS = 900;
 
+	/**
+	 * The validators' own reviews of verdict {@code v}: both passes, withdrawn ones left
+	 * out.
+	 */
+	static final String OWN_REVIEWS = " v.review_pass in (1, 2)"
+			+ " and not exists (select 1 from verdict_withdrawal w where w.verdict_id = v.id)";
+
+	/**
+	 * The bucket of a time column, in SQL that H2 and PostgreSQL both read.
+	 * @param column the column
+	 * @return {@code floor(epoch seconds / 900)} as a bigint
+	 */
+	static String bucket(String column) {
+		return "cast(floor(extract(epoch from " + column + ") / " + SECONDS + ") as bigint)";
+	}
+
 	private TimeBuckets() {
 	}
 
